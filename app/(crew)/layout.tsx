@@ -1,0 +1,7 @@
+import { AppShell } from "@/app/ui/app-shell";
+import { requireRole } from "@/lib/auth/session";
+
+export default async function CrewLayout({ children }: { children: React.ReactNode }) {
+  const user = await requireRole("crew");
+  return <AppShell user={user}>{children}</AppShell>;
+}

@@ -1,0 +1,135 @@
+/** Bid periods and their trips, as the crew and planning pages read them. */
+import { db } from "./client";
+import type { BidPeriodState, Position } from "./generated/enums";
+import type { SessionUser } from "./users";
+import { localDate, localDatesTouched, localTime } from "../domain/time";
+
+export interface TripSummary {
+  code: string;
+  /** base-local dates of the first report and the last release */
+  startDate: string;
+  endDate: string;
+  days: number;
+  layovers: string[];
+  creditMinutes: number;
+  blockMinutes: number;
+  /** base-local clock times */
+  report: string;
+  release: string;
+  legs: number;
+  deadheads: number;
+}
+
+export interface OpenPeriodView {
+  id: string;
+  name: string;
+  baseCode: string;
+  baseName: string;
+  zone: string;
+  startDate: string;
+  endDate: string;
+  deadline: string;
+  trips: TripSummary[];
+}
+
+const isoDate = (d: Date) => d.toISOString().slice(0, 10);
+
+/**
+ * The open bid period of the crew member's base, with the trips that need
+ * their position; null when bidding is not open at their base.
+ */
+export async function openPeriodForCrew(user: SessionUser): Promise<OpenPeriodView | null> {
+  if (!user.crewMemberId) return null;
+  const crew = await db().crewMember.findUnique({
+    where: { id: user.crewMemberId },
+    select: { baseId: true, position: true, base: { select: { stationCode: true, name: true } } },
+  });
+  if (!crew) return null;
+  const period = await db().bidPeriod.findFirst({
+    where: { baseId: crew.baseId, state: "open" },
+    orderBy: { startDate: "asc" },
+    include: {
+      pairings: {
+        orderBy: [{ startsAt: "asc" }, { code: "asc" }],
+        include: { dutyPeriods: { orderBy: { seq: "asc" }, include: { legs: { orderBy: { seq: "asc" } } } } },
+      },
+    },
+  });
+  if (!period) return null;
+  const zone = period.zone;
+  const trips = period.pairings
+    .filter((p) => needs(p.crewNeeded, crew.position))
+    .map((p): TripSummary => {
+      const start = p.startsAt.toISOString();
+      const end = p.endsAt.toISOString();
+      const legs = p.dutyPeriods.flatMap((d) => d.legs);
+      return {
+        code: p.code,
+        startDate: localDate(start, zone),
+        endDate: localDate(end, zone),
+        days: localDatesTouched(start, end, zone).length,
+        layovers: p.dutyPeriods.slice(0, -1).map((d) => d.legs[d.legs.length - 1]?.toCode ?? "?"),
+        creditMinutes: p.creditMinutes,
+        blockMinutes: p.blockMinutes,
+        report: localTime(start, zone),
+        release: localTime(end, zone),
+        legs: legs.length,
+        deadheads: legs.filter((l) => l.deadhead).length,
+      };
+    });
+  return {
+    id: period.id,
+    name: period.name,
+    baseCode: crew.base.stationCode,
+    baseName: crew.base.name,
+    zone,
+    startDate: isoDate(period.startDate),
+    endDate: isoDate(period.endDate),
+    deadline: period.deadline.toISOString(),
+    trips,
+  };
+}
+
+function needs(crewNeeded: unknown, position: Position): boolean {
+  const n = (crewNeeded as Record<string, unknown> | null)?.[position];
+  return typeof n === "number" && n > 0;
+}
+
+export interface PeriodRow {
+  id: string;
+  name: string;
+  baseCode: string;
+  startDate: string;
+  endDate: string;
+  zone: string;
+  deadline: string;
+  state: BidPeriodState;
+  pairings: number;
+  crew: number;
+  submittedBids: number;
+}
+
+/** Every bid period, newest first, with counts for the planning home. */
+export async function listPeriods(): Promise<PeriodRow[]> {
+  const periods = await db().bidPeriod.findMany({
+    orderBy: [{ startDate: "desc" }, { name: "asc" }],
+    include: {
+      base: { select: { stationCode: true, _count: { select: { crew: true } } } },
+      _count: { select: { pairings: true } },
+    },
+  });
+  const submitted = await db().bidSubmission.groupBy({ by: ["bidPeriodId", "crewMemberId"], _count: true });
+  return periods.map((p) => ({
+    id: p.id,
+    name: p.name,
+    baseCode: p.base.stationCode,
+    startDate: isoDate(p.startDate),
+    endDate: isoDate(p.endDate),
+    zone: p.zone,
+    deadline: p.deadline.toISOString(),
+    state: p.state,
+    pairings: p._count.pairings,
+    crew: p.base._count.crew,
+    submittedBids: submitted.filter((s) => s.bidPeriodId === p.id).length,
+  }));
+}

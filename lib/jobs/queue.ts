@@ -1,0 +1,22 @@
+/**
+ * The award job queue: pg-boss 10 on the same PostgreSQL, in its own schema.
+ * One job per award run; any number of worker processes consume it.
+ */
+import PgBoss from "pg-boss";
+
+export const AWARD_QUEUE = "award-run";
+export const BOSS_SCHEMA = "pgboss";
+
+export interface AwardJob {
+  runId: string;
+}
+
+/** A started pg-boss with the award queue in place. */
+export async function startQueue(databaseUrl: string, log: (l: string) => void = () => {}): Promise<PgBoss> {
+  const boss = new PgBoss({ connectionString: databaseUrl, schema: BOSS_SCHEMA });
+  boss.on("error", (e: Error) => log(`queue error: ${e.message}`));
+  await boss.start();
+  // pg-boss 10 returns null from send() for a missing queue instead of throwing.
+  if (!(await boss.getQueue(AWARD_QUEUE))) await boss.createQueue(AWARD_QUEUE);
+  return boss;
+}

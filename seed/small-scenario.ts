@@ -1,0 +1,140 @@
+/**
+ * The small hand-made scenario the tests reuse and the demo shows until the
+ * realistic generator lands: one base (Halvern), a dozen crew in two
+ * positions, a few dozen pairings in a one-month bid period.
+ */
+import { DateTime } from "luxon";
+import { CARRIER, STATIONS, type StationSeed } from "./carrier.ts";
+import { makePairing, type PairingSeed } from "./pairing-factory.ts";
+import { rng } from "./random.ts";
+
+export type PositionName = "captain" | "first_officer" | "flight_attendant" | "purser";
+export type RoleName = "crew" | "scheduler" | "admin";
+
+export interface CrewSeed {
+  id: string;
+  name: string;
+  seniority: number;
+  base: string;
+  position: PositionName;
+  qualifications: string[];
+  vacation?: { start: string; end: string };
+}
+
+export interface UserSeed {
+  email: string;
+  name: string;
+  role: RoleName;
+  password: string;
+  crewId?: string;
+}
+
+export interface PeriodSeed {
+  name: string;
+  base: string;
+  startDate: string;
+  endDate: string;
+  zone: string;
+  opensAt: string;
+  deadline: string;
+  state: "draft" | "open" | "closed" | "awarded" | "published";
+}
+
+export interface Scenario {
+  stations: readonly StationSeed[];
+  base: string;
+  crew: CrewSeed[];
+  users: UserSeed[];
+  period: PeriodSeed;
+  pairings: PairingSeed[];
+}
+
+/** The demo's one shared password; the sign-in page and README print it. */
+export const DEMO_PASSWORD = "larkfield-demo";
+
+const CREW_NAMES = [
+  "Ines Marlowe", "Tomas Brecht", "Aiyana Clearwater", "Ruben Okafor", "Greta Lindqvist", "Dev Raman",
+  "Noor Haddad", "Pavel Sykora", "Mireille Dufresne", "Kofi Mensah", "Hana Ueda", "Sam Whitlock",
+];
+
+/** The base-local month after `now`'s month, with a deadline on the 20th of `now`'s month at 18:00. */
+export function nextPeriod(now: Date, zone: string): { startDate: string; endDate: string; opensAt: string; deadline: string } {
+  let here = DateTime.fromJSDate(now, { zone });
+  // After the 20th, bidding for next month has closed: offer the month after.
+  if (here.day >= 20) here = here.plus({ months: 1 });
+  const start = here.plus({ months: 1 }).startOf("month");
+  return {
+    startDate: start.toISODate()!,
+    endDate: start.endOf("month").toISODate()!,
+    opensAt: here.startOf("month").toUTC().toISO()!,
+    deadline: here.set({ day: 20, hour: 18, minute: 0, second: 0, millisecond: 0 }).toUTC().toISO()!,
+  };
+}
+
+export interface SmallScenarioOptions {
+  seed?: number;
+  /** the clock that places the bid period; tests pass a fixed one */
+  now?: Date;
+  pairings?: number;
+  state?: PeriodSeed["state"];
+}
+
+export function smallScenario(opts: SmallScenarioOptions = {}): Scenario {
+  const r = rng(opts.seed ?? 1);
+  const base = "HLV";
+  const zone = STATIONS.find((s) => s.code === base)!.zone;
+  const dates = nextPeriod(opts.now ?? new Date(), zone);
+  const crew: CrewSeed[] = CREW_NAMES.map((name, i) => ({
+    id: String(4100 + i * 7),
+    name,
+    seniority: i + 1,
+    base,
+    position: i % 2 === 0 ? "captain" : "first_officer",
+    qualifications: ["A220", ...(i % 3 === 0 ? ["lang:es"] : [])],
+  }));
+  const vacationer = crew[4]!;
+  const vStart = DateTime.fromISO(dates.startDate).plus({ days: 9 });
+  vacationer.vacation = { start: vStart.toISODate()!, end: vStart.plus({ days: 6 }).toISODate()! };
+
+  const pairings: PairingSeed[] = [];
+  const count = opts.pairings ?? 36;
+  let flight = 400;
+  const monthDays = DateTime.fromISO(dates.endDate).day;
+  for (let k = 0; k < count; k++) {
+    const days = r.pick([1, 2, 2, 3, 3, 4]);
+    const startDay = 1 + Math.floor((k * (monthDays - days)) / count);
+    const redEye = r.next() < 0.08;
+    const firstDeparture = redEye ? "22:40" : r.pick(["06:10", "07:25", "08:40", "10:15", "12:30", "14:05", "16:50"]);
+    pairings.push(
+      makePairing(
+        {
+          id: `T${100 + k}`,
+          base,
+          startDate: DateTime.fromISO(dates.startDate).plus({ days: startDay - 1 }).toISODate()!,
+          days,
+          firstDeparture,
+          crewNeeded: { captain: 1, first_officer: 1 },
+          requires: ["A220"],
+        },
+        r,
+        () => (flight += r.int(1, 9)),
+      ),
+    );
+  }
+  const mail = (n: string) => `${n.toLowerCase().split(" ")[0]}@${CARRIER.mailDomain}`;
+  const crewUser = (c: CrewSeed): UserSeed => ({ email: mail(c.name), name: c.name, role: "crew", password: DEMO_PASSWORD, crewId: c.id });
+  return {
+    stations: STATIONS,
+    base,
+    crew,
+    users: [
+      crewUser(crew[0]!),
+      crewUser(crew[5]!),
+      crewUser(crew[11]!),
+      { email: `planning@${CARRIER.mailDomain}`, name: "Oriel Banks", role: "scheduler", password: DEMO_PASSWORD },
+      { email: `admin@${CARRIER.mailDomain}`, name: "Wren Adeyemi", role: "admin", password: DEMO_PASSWORD },
+    ],
+    period: { name: DateTime.fromISO(dates.startDate).toFormat("LLLL yyyy"), base, zone, ...dates, state: opts.state ?? "open" },
+    pairings,
+  };
+}
