@@ -1,0 +1,53 @@
+/**
+ * The web server the browser tests talk to: a database of its own (see
+ * tests/support/test-database.ts), migrated and seeded with the small scenario
+ * at a fixed clock, a production build when the sources changed, `next start`
+ * on the test port. Playwright starts and stops this process.
+ */
+import { spawn, spawnSync } from "node:child_process";
+import path from "node:path";
+import { createPrisma } from "../../lib/db/client.ts";
+import { REPO_ROOT } from "../../lib/db/local-server.ts";
+import { needsBuild } from "../../lib/cli/build-state.ts";
+import { smallScenario } from "../../seed/small-scenario.ts";
+import { writeScenario } from "../../seed/write-scenario.ts";
+import { createTestDatabase } from "../support/test-database.ts";
+import { E2E_NOW, E2E_PORT } from "./constants.ts";
+
+const db = await createTestDatabase("e2e");
+const prisma = createPrisma(db.url);
+await writeScenario(prisma, smallScenario({ seed: 11, now: new Date(E2E_NOW) }));
+await prisma.$disconnect();
+
+const next = path.join(REPO_ROOT, "node_modules", ".bin", "next");
+if (needsBuild()) {
+  const built = spawnSync(next, ["build"], { cwd: REPO_ROOT, stdio: "inherit", env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1" } });
+  if (built.status !== 0) {
+    await db.drop();
+    process.exit(1);
+  }
+}
+const web = spawn(next, ["start", "-p", String(E2E_PORT)], {
+  cwd: REPO_ROOT,
+  stdio: "inherit",
+  env: {
+    ...process.env,
+    DATABASE_URL: db.url,
+    NEXTAUTH_URL: `http://localhost:${E2E_PORT}`,
+    NEXTAUTH_SECRET: "e2e-only-secret-not-for-production",
+    NEXT_TELEMETRY_DISABLED: "1",
+  },
+});
+
+let stopping = false;
+async function stop() {
+  if (stopping) return;
+  stopping = true;
+  web.kill("SIGTERM");
+  await new Promise((r) => (web.exitCode !== null ? r(null) : web.once("exit", r)));
+  await db.drop();
+  process.exit(0);
+}
+process.on("SIGINT", () => void stop());
+process.on("SIGTERM", () => void stop());
+web.on("exit", () => void stop());
