@@ -129,12 +129,19 @@ function readPid(file: string): number | undefined {
   return Number.isInteger(pid) && pid > 0 ? pid : undefined;
 }
 
-function isAlive(pid: number): boolean {
+/** True while `pid` runs; a zombie (exited, not yet reaped by its parent) counts as gone. */
+export function isAlive(pid: number): boolean {
   try {
     process.kill(pid, 0);
-    return true;
   } catch (e) {
-    return (e as NodeJS.ErrnoException).code === "EPERM";
+    if ((e as NodeJS.ErrnoException).code !== "EPERM") return false;
+  }
+  try {
+    // Field 3 of /proc/<pid>/stat is the state; Z = zombie. (Linux only; elsewhere trust kill.)
+    const stat = fs.readFileSync(`/proc/${pid}/stat`, "utf8");
+    return stat.slice(stat.lastIndexOf(")") + 2, stat.lastIndexOf(")") + 3) !== "Z";
+  } catch {
+    return !fs.existsSync("/proc/self/stat");
   }
 }
 

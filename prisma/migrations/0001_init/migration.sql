@@ -321,6 +321,12 @@ CREATE UNIQUE INDEX "Pairing_bidPeriodId_code_key" ON "Pairing"("bidPeriodId", "
 CREATE UNIQUE INDEX "DutyPeriod_pairingId_seq_key" ON "DutyPeriod"("pairingId", "seq");
 
 -- CreateIndex
+CREATE INDEX "Leg_fromCode_idx" ON "Leg"("fromCode");
+
+-- CreateIndex
+CREATE INDEX "Leg_toCode_idx" ON "Leg"("toCode");
+
+-- CreateIndex
 CREATE UNIQUE INDEX "Leg_dutyPeriodId_seq_key" ON "Leg"("dutyPeriodId", "seq");
 
 -- CreateIndex
@@ -328,6 +334,9 @@ CREATE INDEX "FixedActivity_crewMemberId_startsAt_idx" ON "FixedActivity"("crewM
 
 -- CreateIndex
 CREATE INDEX "PastDuty_crewMemberId_reportAt_idx" ON "PastDuty"("crewMemberId", "reportAt");
+
+-- CreateIndex
+CREATE INDEX "Bid_bidPeriodId_idx" ON "Bid"("bidPeriodId");
 
 -- CreateIndex
 CREATE UNIQUE INDEX "Bid_crewMemberId_bidPeriodId_key" ON "Bid"("crewMemberId", "bidPeriodId");
@@ -348,6 +357,9 @@ CREATE UNIQUE INDEX "RuleSet_name_key" ON "RuleSet"("name");
 CREATE UNIQUE INDEX "AwardGroup_chosenRunId_key" ON "AwardGroup"("chosenRunId");
 
 -- CreateIndex
+CREATE INDEX "AwardGroup_ruleSetId_idx" ON "AwardGroup"("ruleSetId");
+
+-- CreateIndex
 CREATE UNIQUE INDEX "AwardGroup_bidPeriodId_position_key" ON "AwardGroup"("bidPeriodId", "position");
 
 -- CreateIndex
@@ -363,7 +375,16 @@ CREATE INDEX "AwardedLine_crewMemberId_idx" ON "AwardedLine"("crewMemberId");
 CREATE UNIQUE INDEX "AwardedLine_awardRunId_crewMemberId_key" ON "AwardedLine"("awardRunId", "crewMemberId");
 
 -- CreateIndex
+CREATE INDEX "Explanation_crewMemberId_idx" ON "Explanation"("crewMemberId");
+
+-- CreateIndex
 CREATE UNIQUE INDEX "Explanation_awardRunId_crewMemberId_key" ON "Explanation"("awardRunId", "crewMemberId");
+
+-- CreateIndex
+CREATE INDEX "FairnessEntry_bidPeriodId_idx" ON "FairnessEntry"("bidPeriodId");
+
+-- CreateIndex
+CREATE INDEX "FairnessEntry_awardRunId_idx" ON "FairnessEntry"("awardRunId");
 
 -- CreateIndex
 CREATE UNIQUE INDEX "FairnessEntry_crewMemberId_bidPeriodId_key" ON "FairnessEntry"("crewMemberId", "bidPeriodId");
@@ -433,6 +454,12 @@ ALTER TABLE "AwardGroup" ADD CONSTRAINT "AwardGroup_chosenRunId_fkey" FOREIGN KE
 
 -- AddForeignKey
 ALTER TABLE "AwardRun" ADD CONSTRAINT "AwardRun_awardGroupId_fkey" FOREIGN KEY ("awardGroupId") REFERENCES "AwardGroup"("id") ON DELETE CASCADE ON UPDATE CASCADE;
+
+-- AddForeignKey
+ALTER TABLE "AwardRun" ADD CONSTRAINT "AwardRun_requestedById_fkey" FOREIGN KEY ("requestedById") REFERENCES "User"("id") ON DELETE SET NULL ON UPDATE CASCADE;
+
+-- AddForeignKey
+ALTER TABLE "AwardRun" ADD CONSTRAINT "AwardRun_reviewedById_fkey" FOREIGN KEY ("reviewedById") REFERENCES "User"("id") ON DELETE SET NULL ON UPDATE CASCADE;
 
 -- AddForeignKey
 ALTER TABLE "AwardedLine" ADD CONSTRAINT "AwardedLine_awardRunId_fkey" FOREIGN KEY ("awardRunId") REFERENCES "AwardRun"("id") ON DELETE CASCADE ON UPDATE CASCADE;

@@ -1,0 +1,46 @@
+import { describe, expect, it } from "vitest";
+import { RELEASE_AFTER_MIN, REPORT_BEFORE_MIN, dutyCredit } from "@/seed/pairing-factory";
+import { smallScenario } from "@/seed/small-scenario";
+
+const now = new Date("2026-12-01T12:00:00Z");
+const min = (a: string, b: string) => (Date.parse(b) - Date.parse(a)) / 60000;
+
+describe("the small scenario's pairings", () => {
+  const s = smallScenario({ seed: 5, now });
+
+  it("is the same for the same seed and differs for another", () => {
+    expect(smallScenario({ seed: 5, now })).toEqual(s);
+    expect(smallScenario({ seed: 6, now }).pairings).not.toEqual(s.pairings);
+  });
+
+  it("places the period in the month after next when the 20th has passed", () => {
+    expect(s.period).toMatchObject({ startDate: "2027-01-01", endDate: "2027-01-31" });
+    const late = smallScenario({ now: new Date("2026-12-22T12:00:00Z") });
+    expect(late.period).toMatchObject({ startDate: "2027-02-01", endDate: "2027-02-28" });
+  });
+
+  it.each(s.pairings.map((p) => [p.id, p] as const))("%s starts and ends at the base, with report, release and credit as documented", (_id, p) => {
+    const legs = p.dutyPeriods.flatMap((d) => d.legs);
+    expect(legs[0]!.from).toBe("HLV");
+    expect(legs[legs.length - 1]!.to).toBe("HLV");
+    // No visit home in the middle of a trip.
+    expect(legs.slice(0, -1).every((l) => l.to !== "HLV")).toBe(true);
+    for (const d of p.dutyPeriods) {
+      expect(min(d.report, d.legs[0]!.departure)).toBe(REPORT_BEFORE_MIN);
+      expect(min(d.legs[d.legs.length - 1]!.arrival, d.release)).toBe(RELEASE_AFTER_MIN);
+      // Legs connect and do not overlap.
+      d.legs.slice(1).forEach((l, i) => {
+        expect(l.from).toBe(d.legs[i]!.to);
+        expect(min(d.legs[i]!.arrival, l.departure)).toBeGreaterThanOrEqual(40);
+      });
+      // Duty rig (common practice): credit is the larger of block and half the duty time.
+      const block = d.legs.filter((l) => !l.deadhead).reduce((t, l) => t + l.blockMinutes, 0);
+      expect(dutyCredit(d)).toBe(Math.max(block, Math.round(min(d.report, d.release) / 2)));
+    }
+    // Rest at layovers is at least 11 h.
+    p.dutyPeriods.slice(1).forEach((d, i) => expect(min(p.dutyPeriods[i]!.release, d.report)).toBeGreaterThanOrEqual(11 * 60));
+    expect(p.creditMinutes).toBe(p.dutyPeriods.reduce((t, d) => t + dutyCredit(d), 0));
+    expect(p.creditMinutes).toBeGreaterThanOrEqual(p.blockMinutes);
+    expect(p.tafbMinutes).toBe(min(p.dutyPeriods[0]!.report, p.dutyPeriods[p.dutyPeriods.length - 1]!.release));
+  });
+});
