@@ -4,14 +4,11 @@
  * longitude, across several UTC offsets (one without daylight-saving time, one
  * across the Atlantic for acclimation cases).
  */
+import type { Station } from "../lib/domain/index.ts";
+
 export const CARRIER = { name: "Larkfield Air", flightPrefix: "LK", mailDomain: "larkfield.test" } as const;
 
-export interface StationSeed {
-  code: string;
-  name: string;
-  zone: string;
-  longitude: number;
-}
+export type StationSeed = Station;
 
 export const STATIONS: readonly StationSeed[] = [
   { code: "HLV", name: "Halvern", zone: "America/Denver", longitude: -104.9 },

@@ -6,43 +6,21 @@
  * Credit per duty period = max(block, 1 h per 2 h on duty) — a duty rig that is
  * common practice in agreements (no published source); pairing credit is the sum.
  */
-import { DateTime } from "luxon";
+import type { DutyPeriod, Leg, Pairing } from "../lib/domain/index.ts";
+import { addDays, addMinutes, atLocalTime, instantMs, minutesBetween } from "../lib/domain/time.ts";
 import { CARRIER, STATIONS, blockMinutes, destinations } from "./carrier.ts";
 import type { Rng } from "./random.ts";
 
 export const REPORT_BEFORE_MIN = 60;
 export const RELEASE_AFTER_MIN = 30;
 
-export interface LegSeed {
-  flightNumber: string;
-  from: string;
-  to: string;
-  departure: string;
-  arrival: string;
-  deadhead: boolean;
-  blockMinutes: number;
-  equipment?: string;
-}
+/** The factories build the domain's own shapes (lib/domain), so a seeded pairing parses as one. */
+export type LegSeed = Leg;
+export type DutyPeriodSeed = DutyPeriod;
+export type PairingSeed = Pairing;
 
-export interface DutyPeriodSeed {
-  report: string;
-  release: string;
-  legs: LegSeed[];
-}
-
-export interface PairingSeed {
-  id: string;
-  base: string;
-  dutyPeriods: DutyPeriodSeed[];
-  blockMinutes: number;
-  creditMinutes: number;
-  tafbMinutes: number;
-  crewNeeded: Partial<Record<"captain" | "first_officer" | "flight_attendant" | "purser", number>>;
-  requires: string[];
-}
-
-const minutes = (a: string, b: string) => Math.round((Date.parse(b) - Date.parse(a)) / 60000);
-const addMin = (iso: string, m: number) => new Date(Date.parse(iso) + m * 60000).toISOString();
+const minutes = (a: string, b: string) => Math.round(minutesBetween(a, b));
+const addMin = addMinutes;
 
 /** Duty rig: 1 h of credit per 2 h on duty, or the block time when that is more (common practice). */
 export function dutyCredit(d: DutyPeriodSeed): number {
@@ -72,7 +50,7 @@ export interface PairingSpec {
   days: number;
   /** base-local clock time of the first departure, HH:MM */
   firstDeparture: string;
-  crewNeeded: PairingSeed["crewNeeded"];
+  crewNeeded: Pairing["crewNeeded"];
   requires?: string[];
 }
 
@@ -80,7 +58,7 @@ export interface PairingSpec {
 export function makePairing(spec: PairingSpec, r: Rng, flightNo: () => number): PairingSeed {
   const zone = STATIONS.find((s) => s.code === spec.base)?.zone;
   if (!zone) throw new Error(`unknown base ${spec.base}`);
-  let departure = DateTime.fromISO(`${spec.startDate}T${spec.firstDeparture}`, { zone }).toUTC().toISO()!;
+  let departure = atLocalTime(spec.startDate, spec.firstDeparture, zone);
   let at = spec.base;
   const dutyPeriods: DutyPeriodSeed[] = [];
   for (let day = 0; day < spec.days; day++) {
@@ -122,8 +100,8 @@ export function makePairing(spec: PairingSpec, r: Rng, flightNo: () => number): 
     // Layover: at least 11–13 h of rest, and no earlier than the first departure's
     // clock time (base local) on the next day, so trips keep a daytime rhythm.
     const rested = addMin(duty.release, r.int(11 * 60, 13 * 60) + REPORT_BEFORE_MIN);
-    const nextMorning = DateTime.fromISO(`${spec.startDate}T${spec.firstDeparture}`, { zone }).plus({ days: day + 1, minutes: r.int(-60, 90) }).toUTC().toISO()!;
-    departure = rested > nextMorning ? rested : nextMorning;
+    const nextMorning = addMinutes(atLocalTime(addDays(spec.startDate, day + 1), spec.firstDeparture, zone), r.int(-60, 90));
+    departure = instantMs(rested) > instantMs(nextMorning) ? rested : nextMorning;
   }
   return withTotals({ id: spec.id, base: spec.base, dutyPeriods, crewNeeded: spec.crewNeeded, requires: spec.requires ?? [] });
 }

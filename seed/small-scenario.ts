@@ -3,12 +3,13 @@
  * realistic generator lands: one base (Halvern), a dozen crew in two
  * positions, a few dozen pairings in a one-month bid period.
  */
-import { DateTime } from "luxon";
+import type { Position } from "../lib/domain/index.ts";
+import { addDays, atLocalTime, localDate, startOfLocalDay } from "../lib/domain/time.ts";
 import { CARRIER, STATIONS, type StationSeed } from "./carrier.ts";
 import { makePairing, type PairingSeed } from "./pairing-factory.ts";
 import { rng } from "./random.ts";
 
-export type PositionName = "captain" | "first_officer" | "flight_attendant" | "purser";
+export type PositionName = Position;
 export type RoleName = "crew" | "scheduler" | "admin";
 
 export interface CrewSeed {
@@ -59,17 +60,23 @@ const CREW_NAMES = [
 
 /** The base-local month after `now`'s month, with a deadline on the 20th of `now`'s month at 18:00. */
 export function nextPeriod(now: Date, zone: string): { startDate: string; endDate: string; opensAt: string; deadline: string } {
-  let here = DateTime.fromJSDate(now, { zone });
+  const [y, m, d] = localDate(now.toISOString(), zone).split("-").map(Number) as [number, number, number];
   // After the 20th, bidding for next month has closed: offer the month after.
-  if (here.day >= 20) here = here.plus({ months: 1 });
-  const start = here.plus({ months: 1 }).startOf("month");
+  const bidMonth = d >= 20 ? m + 1 : m; // 1-based, may pass 12
+  const month = (offset: number) => {
+    const t = new Date(Date.UTC(y, bidMonth - 1 + offset, 1));
+    return `${t.getUTCFullYear()}-${String(t.getUTCMonth() + 1).padStart(2, "0")}`;
+  };
+  const startDate = `${month(1)}-01`;
   return {
-    startDate: start.toISODate()!,
-    endDate: start.endOf("month").toISODate()!,
-    opensAt: here.startOf("month").toUTC().toISO()!,
-    deadline: here.set({ day: 20, hour: 18, minute: 0, second: 0, millisecond: 0 }).toUTC().toISO()!,
+    startDate,
+    endDate: addDays(`${month(2)}-01`, -1),
+    opensAt: startOfLocalDay(`${month(0)}-01`, zone),
+    deadline: atLocalTime(`${month(0)}-20`, "18:00", zone),
   };
 }
+
+const MONTHS = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
 
 export interface SmallScenarioOptions {
   seed?: number;
@@ -93,13 +100,13 @@ export function smallScenario(opts: SmallScenarioOptions = {}): Scenario {
     qualifications: ["A220", ...(i % 3 === 0 ? ["lang:es"] : [])],
   }));
   const vacationer = crew[4]!;
-  const vStart = DateTime.fromISO(dates.startDate).plus({ days: 9 });
-  vacationer.vacation = { start: vStart.toISODate()!, end: vStart.plus({ days: 6 }).toISODate()! };
+  const vStart = addDays(dates.startDate, 9);
+  vacationer.vacation = { start: vStart, end: addDays(vStart, 6) };
 
   const pairings: PairingSeed[] = [];
   const count = opts.pairings ?? 36;
   let flight = 400;
-  const monthDays = DateTime.fromISO(dates.endDate).day;
+  const monthDays = Number(dates.endDate.slice(8, 10));
   for (let k = 0; k < count; k++) {
     const days = r.pick([1, 2, 2, 3, 3, 4]);
     const startDay = 1 + Math.floor((k * (monthDays - days)) / count);
@@ -110,7 +117,7 @@ export function smallScenario(opts: SmallScenarioOptions = {}): Scenario {
         {
           id: `T${100 + k}`,
           base,
-          startDate: DateTime.fromISO(dates.startDate).plus({ days: startDay - 1 }).toISODate()!,
+          startDate: addDays(dates.startDate, startDay - 1),
           days,
           firstDeparture,
           crewNeeded: { captain: 1, first_officer: 1 },
@@ -134,7 +141,7 @@ export function smallScenario(opts: SmallScenarioOptions = {}): Scenario {
       { email: `planning@${CARRIER.mailDomain}`, name: "Oriel Banks", role: "scheduler", password: DEMO_PASSWORD },
       { email: `admin@${CARRIER.mailDomain}`, name: "Wren Adeyemi", role: "admin", password: DEMO_PASSWORD },
     ],
-    period: { name: DateTime.fromISO(dates.startDate).toFormat("LLLL yyyy"), base, zone, ...dates, state: opts.state ?? "open" },
+    period: { name: `${MONTHS[Number(dates.startDate.slice(5, 7)) - 1]} ${dates.startDate.slice(0, 4)}`, base, zone, ...dates, state: opts.state ?? "open" },
     pairings,
   };
 }

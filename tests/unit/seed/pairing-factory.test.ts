@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { pairingSchema, stationSchema } from "@/lib/domain";
 import { RELEASE_AFTER_MIN, REPORT_BEFORE_MIN, dutyCredit } from "@/seed/pairing-factory";
 import { smallScenario } from "@/seed/small-scenario";
 
@@ -16,7 +17,17 @@ describe("the small scenario's pairings", () => {
   it("places the period in the month after next when the 20th has passed", () => {
     expect(s.period).toMatchObject({ startDate: "2027-01-01", endDate: "2027-01-31" });
     const late = smallScenario({ now: new Date("2026-12-22T12:00:00Z") });
-    expect(late.period).toMatchObject({ startDate: "2027-02-01", endDate: "2027-02-28" });
+    expect(late.period).toMatchObject({ startDate: "2027-02-01", endDate: "2027-02-28", name: "February 2027" });
+    // 25 Nov: bidding for December has closed, so January of the next year; deadline 20 Dec 18:00 MST.
+    const wrap = smallScenario({ now: new Date("2026-11-25T12:00:00Z") });
+    expect(wrap.period).toMatchObject({ startDate: "2027-01-01", endDate: "2027-01-31", deadline: "2026-12-21T01:00:00Z" });
+    // Before the 20th in summer (MDT, UTC-6): the deadline is 20 Jul 18:00 local = 21 Jul 00:00 UTC.
+    expect(smallScenario({ now: new Date("2027-07-02T12:00:00Z") }).period).toMatchObject({ startDate: "2027-08-01", endDate: "2027-08-31", deadline: "2027-07-21T00:00:00Z" });
+  });
+
+  it("builds stations and pairings that the domain schemas accept as they are", () => {
+    for (const st of s.stations) expect(stationSchema.parse(st)).toEqual(st);
+    for (const p of s.pairings) expect(pairingSchema.parse(p)).toEqual(p);
   });
 
   it.each(s.pairings.map((p) => [p.id, p] as const))("%s starts and ends at the base, with report, release and credit as documented", (_id, p) => {
