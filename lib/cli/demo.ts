@@ -64,7 +64,8 @@ try {
     BIDWRIGHT_DEMO_ACCOUNTS: [`password: ${users[0]?.password}`, ...users.map((u) => `${u.role.padEnd(9)} ${u.email}`)].join("\n"),
   };
   children.push(start("web", bin("next"), ["start", "-p", String(port)], env));
-  children.push(start("worker", bin("tsx"), [path.join(REPO_ROOT, "lib/jobs/worker-main.ts")], env));
+  // `node --import tsx` rather than the tsx wrapper: one process per child, so a pid stops it.
+  children.push(start("worker", process.execPath, ["--import", "tsx", path.join(REPO_ROOT, "lib/jobs/worker-main.ts")], env));
   fs.writeFileSync(PIDS_FILE, children.map((c) => c.pid).join("\n"));
   await waitForHttp(`${url}/sign-in`, 60_000);
   console.log(`\nBidwright is running at ${url}\n\nDemo sign-ins (password for all: ${users[0]?.password}):`);
