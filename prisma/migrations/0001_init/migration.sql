@@ -11,9 +11,6 @@ CREATE TYPE "BidPeriodState" AS ENUM ('draft', 'open', 'closed', 'awarded', 'pub
 CREATE TYPE "ActivityKind" AS ENUM ('vacation', 'training', 'medical', 'office', 'other');
 
 -- CreateEnum
-CREATE TYPE "PastDutyKind" AS ENUM ('carry_in', 'look_back');
-
--- CreateEnum
 CREATE TYPE "AwardRunState" AS ENUM ('queued', 'running', 'succeeded', 'failed', 'cancelled');
 
 -- CreateEnum
@@ -143,8 +140,6 @@ CREATE TABLE "FixedActivity" (
 CREATE TABLE "PastDuty" (
     "id" TEXT NOT NULL,
     "crewMemberId" TEXT NOT NULL,
-    "kind" "PastDutyKind" NOT NULL,
-    "pairingCode" TEXT,
     "reportAt" TIMESTAMPTZ(3) NOT NULL,
     "releaseAt" TIMESTAMPTZ(3) NOT NULL,
     "flightMinutes" INTEGER NOT NULL,
@@ -152,6 +147,18 @@ CREATE TABLE "PastDuty" (
     "endStation" VARCHAR(4),
 
     CONSTRAINT "PastDuty_pkey" PRIMARY KEY ("id")
+);
+
+-- CreateTable
+CREATE TABLE "CarryInTrip" (
+    "id" TEXT NOT NULL,
+    "crewMemberId" TEXT NOT NULL,
+    "pairingCode" TEXT NOT NULL,
+    "dutyPeriods" JSONB NOT NULL,
+    "startsAt" TIMESTAMPTZ(3) NOT NULL,
+    "endsAt" TIMESTAMPTZ(3) NOT NULL,
+
+    CONSTRAINT "CarryInTrip_pkey" PRIMARY KEY ("id")
 );
 
 -- CreateTable
@@ -336,6 +343,9 @@ CREATE INDEX "FixedActivity_crewMemberId_startsAt_idx" ON "FixedActivity"("crewM
 CREATE INDEX "PastDuty_crewMemberId_reportAt_idx" ON "PastDuty"("crewMemberId", "reportAt");
 
 -- CreateIndex
+CREATE INDEX "CarryInTrip_crewMemberId_startsAt_idx" ON "CarryInTrip"("crewMemberId", "startsAt");
+
+-- CreateIndex
 CREATE INDEX "Bid_bidPeriodId_idx" ON "Bid"("bidPeriodId");
 
 -- CreateIndex
@@ -427,6 +437,9 @@ ALTER TABLE "FixedActivity" ADD CONSTRAINT "FixedActivity_crewMemberId_fkey" FOR
 
 -- AddForeignKey
 ALTER TABLE "PastDuty" ADD CONSTRAINT "PastDuty_crewMemberId_fkey" FOREIGN KEY ("crewMemberId") REFERENCES "CrewMember"("id") ON DELETE CASCADE ON UPDATE CASCADE;
+
+-- AddForeignKey
+ALTER TABLE "CarryInTrip" ADD CONSTRAINT "CarryInTrip_crewMemberId_fkey" FOREIGN KEY ("crewMemberId") REFERENCES "CrewMember"("id") ON DELETE CASCADE ON UPDATE CASCADE;
 
 -- AddForeignKey
 ALTER TABLE "DailyFlightTotal" ADD CONSTRAINT "DailyFlightTotal_crewMemberId_fkey" FOREIGN KEY ("crewMemberId") REFERENCES "CrewMember"("id") ON DELETE CASCADE ON UPDATE CASCADE;
