@@ -3,11 +3,12 @@ import type { Pairing } from "./pairing.ts";
 import { atLocalTime, localDatesTouched, overlaps } from "./time.ts";
 
 /**
- * The night window a red-eye flies through, base local time: 02:00 up to 06:00.
- * It is the window of circadian low of 14 CFR 117.3 (0200–0559); using it to
- * call a flight a red-eye is common practice, no published source.
+ * The night window a red-eye flies through, base local time: 01:00 up to 05:00
+ * (common practice, no published source). Not the whole window of circadian
+ * low of 14 CFR 117.3 (0200–0559): with that, every ordinary 05:30 departure
+ * would count as a red-eye, and crew mean an overnight flight by the word.
  */
-export const redEyeWindow = { from: "02:00", until: "06:00" } as const;
+export const redEyeWindow = { from: "01:00", until: "05:00" } as const;
 
 /**
  * Whether a duty period is a red-eye: one of its legs (operated or deadhead) is

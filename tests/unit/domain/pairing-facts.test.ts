@@ -52,7 +52,7 @@ describe("pairing facts", () => {
   });
 });
 
-describe("red-eye (night window 02:00–06:00 base local, common practice)", () => {
+describe("red-eye (night window 01:00–05:00 base local, common practice)", () => {
   it("calls a flight through the night a red-eye, and day trips not", () => {
     expect(isRedEye(T303, ZONE)).toBe(true);
     expect(isRedEyeDuty(T303.dutyPeriods[1]!, ZONE)).toBe(false);
@@ -66,15 +66,15 @@ describe("red-eye (night window 02:00–06:00 base local, common practice)", () 
   });
 
   it("counts a leg that only touches the window's edges correctly", () => {
-    // 00:30–02:00 MST ends as the window opens; 05:59–07:00 MST starts inside it.
-    expect(isRedEyeDuty(duty("2027-03-03T07:30:00Z", "2027-03-03T09:00:00Z"), ZONE)).toBe(false);
-    expect(isRedEyeDuty(duty("2027-03-03T12:59:00Z", "2027-03-03T14:00:00Z"), ZONE)).toBe(true);
-    expect(isRedEyeDuty(duty("2027-03-03T13:00:00Z", "2027-03-03T14:00:00Z"), ZONE)).toBe(false);
+    // 23:30–01:00 MST ends as the window opens; 04:59–06:00 MST starts inside it; 05:00 is after it.
+    expect(isRedEyeDuty(duty("2027-03-03T06:30:00Z", "2027-03-03T08:00:00Z"), ZONE)).toBe(false);
+    expect(isRedEyeDuty(duty("2027-03-03T11:59:00Z", "2027-03-03T13:00:00Z"), ZONE)).toBe(true);
+    expect(isRedEyeDuty(duty("2027-03-03T12:00:00Z", "2027-03-03T13:00:00Z"), ZONE)).toBe(false);
   });
 
   it("shortens the window on the spring-forward night", () => {
-    // 12:15Z–13:30Z is 05:15–06:30 MST on 7 March (in the window) but 06:15–07:30 MDT on 14 March (after it).
-    expect(isRedEyeDuty(duty("2027-03-07T12:15:00Z", "2027-03-07T13:30:00Z"), ZONE)).toBe(true);
-    expect(isRedEyeDuty(duty("2027-03-14T12:15:00Z", "2027-03-14T13:30:00Z"), ZONE)).toBe(false);
+    // 11:15Z–11:45Z is 04:15–04:45 MST on 7 March (in the window) but 05:15–05:45 MDT on 14 March (after it).
+    expect(isRedEyeDuty(duty("2027-03-07T11:15:00Z", "2027-03-07T11:45:00Z"), ZONE)).toBe(true);
+    expect(isRedEyeDuty(duty("2027-03-14T11:15:00Z", "2027-03-14T11:45:00Z"), ZONE)).toBe(false);
   });
 });
