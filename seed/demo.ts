@@ -1,5 +1,5 @@
 /** The demo's data: written once, into an empty database. */
-import type { PrismaClient } from "../lib/db/generated/client";
+import type { Db as PrismaClient } from "../lib/db/client.ts";
 import { smallScenario, type UserSeed } from "./small-scenario.ts";
 import { writeScenario } from "./write-scenario.ts";
 

@@ -2,7 +2,7 @@
  * Writes a scenario into an empty database in one transaction: either all of
  * it lands or none of it does.
  */
-import type { PrismaClient } from "../lib/db/generated/client";
+import type { Db as PrismaClient } from "../lib/db/client.ts";
 import { hashPassword } from "../lib/auth/password.ts";
 import type { Scenario } from "./small-scenario.ts";
 

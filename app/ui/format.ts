@@ -13,16 +13,5 @@ export function shortDate(date: string): string {
   return d.toLocaleDateString("en-US", { weekday: "short", day: "numeric", month: "short", timeZone: "UTC" });
 }
 
-/** An instant in a zone, e.g. "Sun, Dec 20, 18:00 MST". */
-export function zonedDateTime(instant: string, zone: string): string {
-  return new Date(instant).toLocaleString("en-US", {
-    weekday: "short",
-    day: "numeric",
-    month: "short",
-    hour: "2-digit",
-    minute: "2-digit",
-    hourCycle: "h23",
-    timeZone: zone,
-    timeZoneName: "short",
-  });
-}
+/** An instant in a zone, e.g. "Sun, Dec 20, 18:00 MST" (the one time module formats it). */
+export { localDateTimeLabel as zonedDateTime } from "@/lib/domain/time";

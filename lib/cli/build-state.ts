@@ -6,11 +6,13 @@ import fs from "node:fs";
 import path from "node:path";
 import { REPO_ROOT } from "../db/local-server.ts";
 
-const SOURCES = ["app", "lib", "seed", "next.config.mjs", "postcss.config.mjs", "package-lock.json", "tsconfig.json"];
-const SKIP = new Set(["node_modules", ".next", ".data", "generated"]);
+// lib/db/generated is included: a schema change regenerates the client the build bundles.
+const SOURCES = ["app", "lib", "seed", "prisma", "next.config.mjs", "postcss.config.mjs", "package-lock.json", "tsconfig.json"];
+const SKIP = new Set(["node_modules", ".data"]);
 
-export function needsBuild(): boolean {
-  const buildId = path.join(REPO_ROOT, ".next", "BUILD_ID");
+/** True when the build in `distDir` (relative to the repository) is missing or older than a source. */
+export function needsBuild(distDir = ".next"): boolean {
+  const buildId = path.join(REPO_ROOT, distDir, "BUILD_ID");
   if (!fs.existsSync(buildId)) return true;
   const builtAt = fs.statSync(buildId).mtimeMs;
   return SOURCES.some((s) => newerThan(path.join(REPO_ROOT, s), builtAt));

@@ -15,7 +15,7 @@ import path from "node:path";
 import { parseArgs } from "node:util";
 import pg from "pg";
 import { diffMigrationsToSchema, MIGRATION_LOCK, SCRATCH_PREFIX } from "../db/schema-diff.ts";
-import { REPO_ROOT, startLocalServer } from "../db/local-server.ts";
+import { REPO_ROOT, dataRoot, startLocalServer } from "../db/local-server.ts";
 
 const USAGE = `usage: npm run db:migration -- <name>      write the next migration (name: lowercase letters, digits, _)
        npm run db:migration -- --check     fail when schema.prisma and the migrations differ
@@ -77,7 +77,7 @@ async function openServer(): Promise<{ adminUrl: string; close(): Promise<void> 
   if (url) return { adminUrl: url, close: async () => {} };
   // A data folder of its own: starting on the demo's folder would stop a demo that is running.
   const server = await startLocalServer({
-    dataDir: path.join(REPO_ROOT, ".data", "pg-migration"),
+    dataDir: path.join(dataRoot(), "pg-migration"),
     log: (line) => console.error(line),
   });
   console.error(`using an embedded PostgreSQL on port ${server.port} (set DATABASE_URL to use your own)`);

@@ -22,7 +22,7 @@ const bin = (name: string) => path.join(REPO_ROOT, "node_modules", ".bin", name)
 
 stopLeftovers();
 const db = await resolveDatabase({ log });
-log(db.server ? `embedded PostgreSQL on port ${db.server.port} (data in .data/pg)` : `using DATABASE_URL (${new URL(db.url).host})`);
+log(db.server ? `embedded PostgreSQL on port ${db.server.port} (data in ${path.relative(REPO_ROOT, db.server.dataDir).startsWith("..") ? db.server.dataDir : path.relative(REPO_ROOT, db.server.dataDir)})` : `using DATABASE_URL (${new URL(db.url).host})`);
 const children: ChildProcess[] = [];
 let stopping = false;
 

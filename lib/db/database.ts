@@ -3,6 +3,7 @@
  * embedded server with a database of ours on it.
  */
 import pg from "pg";
+import { parse as parseConnectionString } from "pg-connection-string";
 import { startLocalServer, type LocalServer } from "./local-server.ts";
 
 export const DEMO_DATABASE = "bidwright";
@@ -53,10 +54,14 @@ export function withDatabase(url: string, name: string): string {
   return u.toString();
 }
 
-/** True for a server on this machine: db:reset refuses anything else. */
+/**
+ * True for a server on this machine: db:reset refuses anything else. Parsed
+ * the way pg itself reads a URL (npm pg-connection-string), so a `?host=`
+ * option cannot point elsewhere behind a local-looking host name.
+ */
 export function isLocalUrl(url: string): boolean {
-  const host = new URL(url).hostname;
-  return ["localhost", "127.0.0.1", "[::1]", "::1", ""].includes(host);
+  const host = parseConnectionString(url).host ?? "";
+  return ["localhost", "127.0.0.1", "::1", "[::1]"].includes(host) || host.startsWith("/");
 }
 
 function assertIdentifier(name: string): void {

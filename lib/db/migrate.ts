@@ -20,16 +20,22 @@ export interface Migration {
   checksum: string;
 }
 
-/** The committed migrations, in the order they apply. */
+/**
+ * The committed migrations, in the order they apply. A migration folder
+ * without its migration.sql is an error, as it is for Prisma's own CLI.
+ * The one reader of the folder: the runner and the schema diff both use it.
+ */
 export function readMigrations(dir = MIGRATIONS_DIR): Migration[] {
   if (!fs.existsSync(dir)) return [];
   return fs
     .readdirSync(dir, { withFileTypes: true })
-    .filter((e) => e.isDirectory() && fs.existsSync(path.join(dir, e.name, "migration.sql")))
+    .filter((e) => e.isDirectory())
     .map((e) => e.name)
     .sort()
     .map((name) => {
-      const sql = fs.readFileSync(path.join(dir, name, "migration.sql"), "utf8");
+      const file = path.join(dir, name, "migration.sql");
+      if (!fs.existsSync(file)) throw new Error(`${file} is missing: every folder in ${dir} must hold a migration.sql`);
+      const sql = fs.readFileSync(file, "utf8");
       return { name, sql, checksum: createHash("sha256").update(sql).digest("hex") };
     });
 }

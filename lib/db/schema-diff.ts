@@ -12,6 +12,7 @@ import fs from "node:fs";
 import { createRequire } from "node:module";
 import path from "node:path";
 import pg from "pg";
+import { readMigrations } from "./migrate.ts";
 import { PrismaPg } from "@prisma/adapter-pg";
 import { bindMigrationAwareSqlAdapterFactory, ColumnTypeEnum, type ErrorRegistry } from "@prisma/driver-adapter-utils";
 import * as glue from "@prisma/schema-engine-wasm/schema_engine_bg";
@@ -80,19 +81,14 @@ export function readMigrationList(dir: string): MigrationList {
   const lockPath = path.join(dir, "migration_lock.toml");
   // Before the first migration there is no lock file; the engine needs one to know the connector.
   const lock = fs.existsSync(lockPath) ? fs.readFileSync(lockPath, "utf8") : MIGRATION_LOCK;
-  const entries = fs.existsSync(dir) ? fs.readdirSync(dir, { withFileTypes: true }) : [];
-  const names = entries.filter((e) => e.isDirectory()).map((e) => e.name);
   return {
     baseDir: dir,
     lockfile: { path: "migration_lock.toml", content: lock },
     shadowDbInitScript: "",
-    migrationDirectories: names.sort().map((name) => {
-      const file = path.join(dir, name, "migration.sql");
-      const content = fs.existsSync(file)
-        ? { tag: "ok" as const, value: fs.readFileSync(file, "utf8") }
-        : { tag: "error" as const, value: `${file} is missing` };
-      return { path: name, migrationFile: { path: "migration.sql", content } };
-    }),
+    migrationDirectories: readMigrations(dir).map((m) => ({
+      path: m.name,
+      migrationFile: { path: "migration.sql", content: { tag: "ok" as const, value: m.sql } },
+    })),
   };
 }
 

@@ -16,7 +16,7 @@ export interface SessionUser {
 
 /** The user for an e-mail and password, or null; never says which of the two was wrong. */
 export async function checkCredentials(email: string, password: string): Promise<SessionUser | null> {
-  const user = await db().user.findUnique({ where: { email: email.trim().toLowerCase() } });
+  const user = await db().user.findUnique({ where: { email: email.trim().toLowerCase() }, omit: { passwordHash: false } });
   // Compare against a hash of a random string when the account is unknown, so timing does not tell.
   const ok = await verifyPassword(password, user?.passwordHash ?? DECOY_HASH);
   if (!user || !ok) return null;

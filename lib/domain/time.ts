@@ -157,3 +157,17 @@ export function dayOfWeek(date: string): number {
 export function overlaps(aStart: string, aEnd: string, bStart: string, bEnd: string): boolean {
   return instantMs(aStart) < instantMs(bEnd) && instantMs(bStart) < instantMs(aEnd);
 }
+
+/** An instant as people read it in a zone, e.g. "Sun, Dec 20, 18:00 MST" (en-US, 24-hour clock). */
+export function localDateTimeLabel(instant: string, zone: string): string {
+  return new Date(instantMs(instant)).toLocaleString("en-US", {
+    weekday: "short",
+    month: "short",
+    day: "numeric",
+    hour: "2-digit",
+    minute: "2-digit",
+    hourCycle: "h23",
+    timeZone: zone,
+    timeZoneName: "short",
+  });
+}

@@ -20,8 +20,9 @@ await writeScenario(prisma, smallScenario({ seed: 11, now: new Date(E2E_NOW) }))
 await prisma.$disconnect();
 
 const next = path.join(REPO_ROOT, "node_modules", ".bin", "next");
-if (needsBuild()) {
-  const built = spawnSync(next, ["build"], { cwd: REPO_ROOT, stdio: "inherit", env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1" } });
+const DIST = ".next-e2e";
+if (needsBuild(DIST)) {
+  const built = spawnSync(next, ["build"], { cwd: REPO_ROOT, stdio: "inherit", env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1", BIDWRIGHT_DIST_DIR: DIST } });
   if (built.status !== 0) {
     await db.drop();
     process.exit(1);
@@ -36,6 +37,7 @@ const web = spawn(next, ["start", "-p", String(E2E_PORT)], {
     NEXTAUTH_URL: `http://localhost:${E2E_PORT}`,
     NEXTAUTH_SECRET: "e2e-only-secret-not-for-production",
     NEXT_TELEMETRY_DISABLED: "1",
+    BIDWRIGHT_DIST_DIR: DIST,
   },
 });
 

@@ -3,10 +3,10 @@ import fs from "node:fs";
 import path from "node:path";
 import pg from "pg";
 import { afterAll, describe, expect, it } from "vitest";
-import { REPO_ROOT, isAlive, startLocalServer } from "@/lib/db/local-server";
+import { REPO_ROOT, dataRoot, isAlive, startLocalServer } from "@/lib/db/local-server";
 
 // The embedded server itself, whatever DATABASE_URL says: the demo's zero-setup path.
-const dataDir = path.join(REPO_ROOT, ".data", "test-runs", `crash_${process.pid}`);
+const dataDir = path.join(dataRoot(), "test-runs", `crash_${process.pid}`);
 
 async function version(url: string): Promise<string> {
   const c = new pg.Client({ connectionString: url });

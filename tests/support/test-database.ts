@@ -7,7 +7,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { createDatabaseIfMissing, dropDatabase, withDatabase } from "../../lib/db/database.ts";
-import { REPO_ROOT, startLocalServer, type LocalServer } from "../../lib/db/local-server.ts";
+import { dataRoot, startLocalServer, type LocalServer } from "../../lib/db/local-server.ts";
 import { applyMigrations } from "../../lib/db/migrate.ts";
 
 export interface TestDatabase {
@@ -24,7 +24,7 @@ export async function createTestDatabase(label: string): Promise<TestDatabase> {
   let serverUrl = process.env.DATABASE_URL;
   let dataDir: string | undefined;
   if (!serverUrl) {
-    dataDir = path.join(REPO_ROOT, ".data", "test-runs", name);
+    dataDir = path.join(dataRoot(), "test-runs", name);
     server = await startLocalServer({ dataDir, port: 0 });
     serverUrl = server.adminUrl;
   }

@@ -8,6 +8,9 @@ describe("database URLs", () => {
     expect(isLocalUrl("postgresql://u:p@[::1]:5432/x")).toBe(true);
     expect(isLocalUrl("postgresql://u:p@db.internal:5432/x")).toBe(false);
     expect(isLocalUrl("postgresql://u:p@10.0.0.4/x")).toBe(false);
+    // pg honours ?host= over the authority part: that counts, not the name before it.
+    expect(isLocalUrl("postgresql://u:p@localhost/x?host=db.internal")).toBe(false);
+    expect(isLocalUrl("postgresql://u@localhost/x?host=/var/run/postgresql")).toBe(true);
   });
 
   it("swaps the database name and keeps credentials and options", () => {

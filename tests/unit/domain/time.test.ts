@@ -6,6 +6,7 @@ import {
   dayOfWeek,
   instantSchema,
   localDate,
+  localDateTimeLabel,
   localDatesTouched,
   localDayMinutes,
   localTime,
@@ -134,5 +135,12 @@ describe("instant and zone schemas", () => {
     const invented = zoneSchema.safeParse("Mars/Olympus_Mons");
     expect(invented.success).toBe(false);
     expect(invented.error?.issues[0]?.message).toContain("Mars/Olympus_Mons");
+  });
+});
+
+describe("localDateTimeLabel", () => {
+  it("names the zone's abbreviation on each side of a DST change (America/Denver, 14 Mar 2027)", () => {
+    expect(localDateTimeLabel("2026-12-21T01:00:00Z", "America/Denver")).toBe("Sun, Dec 20, 18:00 MST");
+    expect(localDateTimeLabel("2027-03-15T00:00:00Z", "America/Denver")).toBe("Sun, Mar 14, 18:00 MDT");
   });
 });
