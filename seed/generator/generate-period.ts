@@ -46,7 +46,7 @@ export function generatePeriod(input: GeneratorInput = {}): Bundle {
       schemaVersion: 1,
       period,
       group: { base: params.base, position },
-      stations: STATIONS,
+      stations: [...STATIONS].sort((a, b) => a.code.localeCompare(b.code)),
       pairings,
       crew: groupCrew,
       bids: Object.fromEntries(Object.entries(bids).filter(([id]) => ids.has(id))),

@@ -90,21 +90,22 @@ function makeMember(ctx: CrewContext, r: Rng, id: string, seniority: number, pos
     qualifications,
     fixedActivities: fixedActivities.sort((a, b) => a.start.localeCompare(b.start)),
     carryIn,
-    lookBack: makeHistory(r, zone, historyEnd),
+    lookBack: makeHistory(r, zone, params.startDate, historyEnd),
     carriedWeight: 1,
   };
 }
 
 /**
- * A year of flying before `end` (exclusive): blocks of 2–4 duty days and 2–5
+ * A year of flying before the period, stopping at `end` (exclusive; a carry-in trip starts there): blocks of 2–4 duty days and 2–5
  * days off, 2.5–7 h of flight time a day. Gives about 600–800 h a year, inside
  * 14 CFR 117.23(b)'s 1,000 h. The last 28 days' duties are listed one by one.
  */
-function makeHistory(r: Rng, zone: string, end: string): CrewMember["lookBack"] {
+function makeHistory(r: Rng, zone: string, periodStart: string, end: string): CrewMember["lookBack"] {
   const duties: CrewMember["lookBack"]["duties"] = [];
   const dailyFlightMinutes: CrewMember["lookBack"]["dailyFlightMinutes"] = [];
-  const first = addDays(end, -365);
-  const recent = addDays(end, -28);
+  // The windows rolling limits read: 365 days of daily totals, 28 days of duties, before the period.
+  const first = addDays(periodStart, -365);
+  const recent = addDays(periodStart, -28);
   let day = addDays(first, r.int(0, 4));
   while (day < addDays(end, -1)) {
     const on = r.int(2, 4);

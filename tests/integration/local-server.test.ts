@@ -25,7 +25,9 @@ function runTsx(script: string): Promise<string> {
 }
 
 describe("the embedded PostgreSQL", () => {
-  afterAll(() => fs.rmSync(dataDir, { recursive: true, force: true }));
+  afterAll(() => {
+    for (const f of [dataDir, `${dataDir}.password`, `${dataDir}.owner`]) fs.rmSync(f, { recursive: true, force: true });
+  });
 
   it("recovers after its owner was killed, and refuses a second live owner", async () => {
     // A child starts the server, then dies by SIGKILL, leaving PostgreSQL running.

@@ -40,6 +40,7 @@ export async function createTestDatabase(label: string): Promise<TestDatabase> {
       if (server) {
         await server.stop();
         fs.rmSync(dataDir!, { recursive: true, force: true });
+        fs.rmSync(`${dataDir}.password`, { force: true });
       }
     },
   };
