@@ -1,13 +1,49 @@
-/** The demo's data: written once, into an empty database. */
-import type { Db as PrismaClient } from "../lib/db/client.ts";
-import { smallScenario, type UserSeed } from "./small-scenario.ts";
-import { writeScenario } from "./write-scenario.ts";
+/**
+ * The demo's data, written once into an empty database: a generated month at
+ * Halvern for captains and first officers (about 64 crew and 250 trips),
+ * bidding open until the 20th, with the generated bids of the other crew
+ * already in and the demo crew accounts' own bids left for the visitor.
+ */
+import type { Db } from "../lib/db/client.ts";
+import { importBundle } from "../lib/db/period-import.ts";
+import { daysBetween } from "../lib/domain/time.ts";
+import { STATIONS } from "./carrier.ts";
+import { DEMO_PASSWORD, demoUsers, writeUsers, type UserSeed } from "./demo-users.ts";
+import { generatePeriod } from "./generator/generate-period.ts";
+import { nextPeriod } from "./small-scenario.ts";
 
-/** Seeds the demo when the database holds no accounts; returns the demo sign-ins either way. */
-export async function seedDemoIfEmpty(prisma: PrismaClient): Promise<{ seeded: boolean; users: UserSeed[] }> {
-  const scenario = smallScenario({ seed: 7 });
-  const existing = await prisma.user.count();
-  if (existing > 0) return { seeded: false, users: scenario.users };
-  await writeScenario(prisma, scenario);
-  return { seeded: true, users: scenario.users };
+export const DEMO_BASE = "HLV";
+
+/** The demo bundle for the bid period that `now` is bidding for. */
+export function demoBundle(now: Date) {
+  const zone = STATIONS.find((s) => s.code === DEMO_BASE)!.zone;
+  const window = nextPeriod(now, zone);
+  const bundle = generatePeriod({
+    seed: 7,
+    crew: 32,
+    tightness: 0.95,
+    base: DEMO_BASE,
+    startDate: window.startDate,
+    days: daysBetween(window.startDate, window.endDate) + 1,
+  });
+  return { bundle, window };
+}
+
+/**
+ * Seeds the demo when the database holds no accounts. Returns the sign-ins
+ * either way: the new ones, or those already in the database (first ten).
+ */
+export async function seedDemoIfEmpty(prisma: Db, now = new Date()): Promise<{ seeded: boolean; users: UserSeed[] }> {
+  if ((await prisma.user.count()) > 0) {
+    const rows = await prisma.user.findMany({ orderBy: [{ role: "asc" }, { email: "asc" }], take: 10 });
+    return { seeded: false, users: rows.map((u) => ({ email: u.email, name: u.name, role: u.role, password: DEMO_PASSWORD })) };
+  }
+  const { bundle, window } = demoBundle(now);
+  const users = demoUsers(bundle);
+  // The visitor builds the demo accounts' bids themselves.
+  const mine = new Set(users.flatMap((u) => (u.crewId ? [u.crewId] : [])));
+  for (const instance of bundle.instances) for (const id of mine) delete instance.bids[id];
+  await importBundle(prisma, bundle, { state: "open", opensAt: window.opensAt, deadline: window.deadline });
+  await writeUsers(prisma, users);
+  return { seeded: true, users };
 }

@@ -15,7 +15,7 @@
  * block here. Pairing credit is the sum over its duty periods.
  */
 import type { DutyPeriod, Leg, Pairing } from "../lib/domain/index.ts";
-import { addDays, addMinutes, atLocalTime, instantMs, minutesBetween } from "../lib/domain/time.ts";
+import { addDays, addMinutes, atLocalTime, instantMs, minutesBetween, toInstant } from "../lib/domain/time.ts";
 import { CARRIER, OCEANIC, STATIONS, blockMinutes, destinations } from "./carrier.ts";
 import type { Rng } from "./random.ts";
 
@@ -30,6 +30,8 @@ export type DutyPeriodSeed = DutyPeriod;
 export type PairingSeed = Pairing;
 
 const minutes = (a: string, b: string) => Math.round(minutesBetween(a, b));
+/** Timetables run in 5-minute steps. */
+const ceil5 = (instant: string) => toInstant(new Date(Math.ceil(instantMs(instant) / 300_000) * 300_000));
 const legBlock = (legs: readonly Leg[]) => legs.reduce((s, l) => s + (l.deadhead ? 0 : l.blockMinutes), 0);
 
 /** Duty rig: 1 h of credit per 2 h on duty, or the block time when that is more (common practice). */
@@ -118,7 +120,7 @@ export function makePairing(spec: PairingSpec, r: Rng, flightNo: () => number): 
       legs.push({ flightNumber: `${CARRIER.flightPrefix}${flightNo()}`, from: at, to, departure, arrival, deadhead, blockMinutes: b, equipment: "A220" });
       dayBlock += deadhead ? 0 : b;
       at = to;
-      departure = addMinutes(arrival, target >= 4 ? r.int(35, 55) : r.int(40, 95));
+      departure = ceil5(addMinutes(arrival, target >= 4 ? r.int(35, 55) : r.int(40, 95)));
       if (to === spec.base) break;
     }
     if (legs.length === 0) throw new Error(`pairing ${spec.id}: no leg fits day ${day + 1} from ${at}`);
@@ -133,7 +135,7 @@ export function makePairing(spec: PairingSpec, r: Rng, flightNo: () => number): 
     // clock time (base local) on the next day, so trips keep a daytime rhythm.
     const rested = addMinutes(duty.release, r.int(MIN_LAYOVER_REST_MIN, 13 * 60) + REPORT_BEFORE_MIN);
     const nextMorning = addMinutes(atLocalTime(addDays(spec.startDate, day + 1), spec.firstDeparture, zone), r.int(-60, 90));
-    departure = instantMs(rested) > instantMs(nextMorning) ? rested : nextMorning;
+    departure = ceil5(instantMs(rested) > instantMs(nextMorning) ? rested : nextMorning);
   }
   return withTotals({ id: spec.id, base: spec.base, dutyPeriods, crewNeeded: spec.crewNeeded, requires: spec.requires ?? [] });
 }

@@ -3,14 +3,16 @@
  * realistic generator lands: one base (Halvern), a dozen crew in two
  * positions, a few dozen pairings in a one-month bid period.
  */
-import type { Position } from "../lib/domain/index.ts";
+import type { Bundle, CrewMember, Position } from "../lib/domain/index.ts";
+import { bundleSchema } from "../lib/domain/index.ts";
+import { DEMO_PASSWORD, type UserSeed } from "./demo-users.ts";
+import { ruleSetFor } from "./generator/rule-set-presets.ts";
 import { addDays, atLocalTime, localDate, startOfLocalDay } from "../lib/domain/time.ts";
 import { CARRIER, STATIONS, type StationSeed } from "./carrier.ts";
 import { makePairing, type PairingSeed } from "./pairing-factory.ts";
 import { rng } from "./random.ts";
 
 export type PositionName = Position;
-export type RoleName = "crew" | "scheduler" | "admin";
 
 export interface CrewSeed {
   id: string;
@@ -22,13 +24,6 @@ export interface CrewSeed {
   vacation?: { start: string; end: string };
 }
 
-export interface UserSeed {
-  email: string;
-  name: string;
-  role: RoleName;
-  password: string;
-  crewId?: string;
-}
 
 export interface PeriodSeed {
   name: string;
@@ -50,8 +45,7 @@ export interface Scenario {
   pairings: PairingSeed[];
 }
 
-/** The demo's one shared password; the sign-in page and README print it. */
-export const DEMO_PASSWORD = "larkfield-demo";
+export { DEMO_PASSWORD, type UserSeed } from "./demo-users.ts";
 
 const CREW_NAMES = [
   "Ines Marlowe", "Tomas Brecht", "Aiyana Clearwater", "Ruben Okafor", "Greta Lindqvist", "Dev Raman",
@@ -144,4 +138,41 @@ export function smallScenario(opts: SmallScenarioOptions = {}): Scenario {
     period: { name: `${MONTHS[Number(dates.startDate.slice(5, 7)) - 1]} ${dates.startDate.slice(0, 4)}`, base, zone, ...dates, state: opts.state ?? "open" },
     pairings,
   };
+}
+
+/** The scenario as a bundle (one instance per position), the shape the database import takes. */
+export function smallScenarioBundle(s: Scenario): Bundle {
+  const { zone } = s.period;
+  const crew: CrewMember[] = s.crew.map((c) => ({
+    id: c.id,
+    name: c.name,
+    seniority: c.seniority,
+    base: c.base,
+    position: c.position,
+    qualifications: c.qualifications,
+    // A vacation covers whole base-local days, first to last.
+    fixedActivities: c.vacation
+      ? [{ kind: "vacation", start: startOfLocalDay(c.vacation.start, zone), end: startOfLocalDay(addDays(c.vacation.end, 1), zone), label: "Annual leave" }]
+      : [],
+    carryIn: [],
+    lookBack: { duties: [], dailyFlightMinutes: [] },
+    carriedWeight: 1,
+  }));
+  const period = { id: `${s.base}-${s.period.startDate.slice(0, 7)}`, name: s.period.name, startDate: s.period.startDate, endDate: s.period.endDate, zone };
+  const positions = [...new Set(crew.map((c) => c.position))];
+  return bundleSchema.parse({
+    schemaVersion: 1,
+    period,
+    instances: positions.map((position) => ({
+      schemaVersion: 1,
+      period,
+      group: { base: s.base, position },
+      stations: [...s.stations].sort((a, b) => a.code.localeCompare(b.code)),
+      pairings: s.pairings.filter((p) => (p.crewNeeded[position] ?? 0) > 0),
+      crew: crew.filter((c) => c.position === position),
+      bids: {},
+      ruleSet: ruleSetFor(position),
+      settings: {},
+    })),
+  });
 }

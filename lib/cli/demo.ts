@@ -69,7 +69,7 @@ try {
   fs.writeFileSync(PIDS_FILE, children.map((c) => c.pid).join("\n"));
   await waitForHttp(`${url}/sign-in`, 60_000);
   console.log(`\nBidwright is running at ${url}\n\nDemo sign-ins (password for all: ${users[0]?.password}):`);
-  for (const u of users) console.log(`  ${u.role.padEnd(9)} ${u.email.padEnd(28)} ${u.name}`);
+  for (const u of users) console.log(`  ${u.role.padEnd(9)} ${u.email.padEnd(34)} ${u.name}`);
   console.log("\nCtrl-C stops the web server, the award worker and the database.\n");
 } catch (e) {
   console.error(`[demo] ${(e as Error).message}`);

@@ -11,6 +11,7 @@
  * seniority, activities and carry-in by start, look-back duties by report,
  * daily totals by date.
  */
+import { pairingFromRow } from "./pairing-rows";
 import { AppError, awardGroupKey, crewNeededSchema, positions, schemaVersion, toInstant, type Position } from "../domain/index";
 import { dateText, referencedStations, type CrewRow, type PairingRow, type PeriodRow, type PeriodRows, type SubmissionRow } from "./period-export-rows";
 
@@ -80,32 +81,6 @@ function needs(row: PairingRow, position: Position): boolean {
     );
   }
   return (parsed.data[position] ?? 0) > 0;
-}
-
-function pairingOut(row: PairingRow, base: string) {
-  return {
-    id: row.code,
-    base,
-    dutyPeriods: row.dutyPeriods.map((duty) => ({
-      report: toInstant(duty.reportAt),
-      release: toInstant(duty.releaseAt),
-      legs: duty.legs.map((leg) => ({
-        flightNumber: leg.flightNumber,
-        from: leg.fromCode,
-        to: leg.toCode,
-        departure: toInstant(leg.departsAt),
-        arrival: toInstant(leg.arrivesAt),
-        deadhead: leg.deadhead,
-        blockMinutes: leg.blockMinutes,
-        ...(leg.equipment === null ? {} : { equipment: leg.equipment }),
-      })),
-    })),
-    blockMinutes: row.blockMinutes,
-    creditMinutes: row.creditMinutes,
-    tafbMinutes: row.tafbMinutes,
-    crewNeeded: row.crewNeeded,
-    requires: row.requires,
-  };
 }
 
 function crewOut(row: CrewRow, base: string) {
@@ -187,7 +162,7 @@ export function assembleBundle(rows: PeriodRows): { candidate: unknown; sources:
         const s = stationByCode.get(code);
         return s ? { code: s.code, name: s.name, zone: s.zone, longitude: s.longitude } : { code };
       }),
-      pairings: groupPairings.map((p) => pairingOut(p, base)),
+      pairings: groupPairings.map((p) => pairingFromRow(p, base)),
       crew: groupCrew.map((c) => crewOut(c, base)),
       bids,
       ruleSet: group.ruleSet.document,

@@ -3,6 +3,7 @@
  * transaction so that every query sees the same snapshot (a bid submitted
  * halfway through an export is either wholly in it or wholly out).
  */
+import { pairingInclude, type PairingRow } from "./pairing-rows";
 import { AppError } from "../domain/index";
 import type {
   BidSubmission,
@@ -22,14 +23,9 @@ const periodInclude = {
   groups: { include: { ruleSet: true } },
 } satisfies Prisma.BidPeriodInclude;
 
-const pairingInclude = {
-  dutyPeriods: { include: { legs: true } },
-} satisfies Prisma.PairingInclude;
 
 /** A bid period row with its base and award groups (each with its rule set). */
 export type PeriodRow = Prisma.BidPeriodGetPayload<{ include: typeof periodInclude }>;
-/** A pairing row with its duty periods and legs. */
-export type PairingRow = Prisma.PairingGetPayload<{ include: typeof pairingInclude }>;
 /** A crew member row with the children that fall in the period's windows. */
 export type CrewRow = CrewMember & {
   activities: FixedActivity[];
@@ -154,3 +150,5 @@ export function referencedStations(member: CrewRow): string[] {
   }
   return codes;
 }
+
+export type { PairingRow };

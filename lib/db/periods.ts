@@ -1,8 +1,9 @@
 /** Bid periods and their trips, as the crew and planning pages read them. */
 import { db } from "./client";
-import type { BidPeriodState, Position } from "./generated/enums";
+import type { BidPeriodState } from "./generated/enums";
 import type { SessionUser } from "./users";
-import { localDate, localDatesTouched, localTime } from "../domain/time";
+import { layoverStations, pairingSchema, tripFacts } from "../domain/index";
+import { pairingFromRow } from "./pairing-rows";
 
 export interface TripSummary {
   code: string;
@@ -18,6 +19,7 @@ export interface TripSummary {
   release: string;
   legs: number;
   deadheads: number;
+  redEye: boolean;
 }
 
 export interface OpenPeriodView {
@@ -58,23 +60,24 @@ export async function openPeriodForCrew(user: SessionUser): Promise<OpenPeriodVi
   if (!period) return null;
   const zone = period.zone;
   const trips = period.pairings
-    .filter((p) => needs(p.crewNeeded, crew.position))
+    .map((row) => pairingSchema.parse(pairingFromRow(row, crew.base.stationCode)))
+    .filter((p) => (p.crewNeeded[crew.position] ?? 0) > 0)
     .map((p): TripSummary => {
-      const start = p.startsAt.toISOString();
-      const end = p.endsAt.toISOString();
+      const facts = tripFacts(p, zone);
       const legs = p.dutyPeriods.flatMap((d) => d.legs);
       return {
-        code: p.code,
-        startDate: localDate(start, zone),
-        endDate: localDate(end, zone),
-        days: localDatesTouched(start, end, zone).length,
-        layovers: p.dutyPeriods.slice(0, -1).map((d) => d.legs[d.legs.length - 1]?.toCode ?? "?"),
+        code: p.id,
+        startDate: facts.dates[0]!,
+        endDate: facts.dates[facts.dates.length - 1]!,
+        days: facts.dates.length,
+        layovers: layoverStations(p),
         creditMinutes: p.creditMinutes,
         blockMinutes: p.blockMinutes,
-        report: localTime(start, zone),
-        release: localTime(end, zone),
+        report: facts.reportTime,
+        release: facts.releaseTime,
         legs: legs.length,
         deadheads: legs.filter((l) => l.deadhead).length,
+        redEye: facts.redEye,
       };
     });
   return {
@@ -88,11 +91,6 @@ export async function openPeriodForCrew(user: SessionUser): Promise<OpenPeriodVi
     deadline: period.deadline.toISOString(),
     trips,
   };
-}
-
-function needs(crewNeeded: unknown, position: Position): boolean {
-  const n = (crewNeeded as Record<string, unknown> | null)?.[position];
-  return typeof n === "number" && n > 0;
 }
 
 export interface PeriodRow {

@@ -73,11 +73,11 @@ describe("a seeded bid period read back through lib/db", () => {
     await db().user.update({ where: { id: u!.id }, data: { role: "crew" } });
   });
 
-  it("writes a scenario all or nothing: a second copy fails and leaves the first untouched", async () => {
+  it("refuses a second copy of the period, naming the clash, and leaves the first untouched", async () => {
     const before = await db().pairing.count();
-    await expect(writeScenario(db(), scenario)).rejects.toThrow();
+    await expect(writeScenario(db(), scenario)).rejects.toThrow(/already in the database/);
     expect(await db().pairing.count()).toBe(before);
     expect(await db().bidPeriod.count()).toBe(1);
-    expect(await db().base.count()).toBe(1);
+    expect(await db().user.count()).toBe(scenario.users.length);
   });
 });

@@ -37,26 +37,37 @@ export default async function TripsPage() {
 function TripCard({ trip }: { trip: TripSummary }) {
   const dates = trip.startDate === trip.endDate ? shortDate(trip.startDate) : `${shortDate(trip.startDate)} – ${shortDate(trip.endDate)}`;
   return (
-    <li className="rounded-lg border border-slate-200 bg-white p-4 shadow-sm" data-trip={trip.code}>
+    <li className="rounded-lg border border-slate-200 bg-white px-4 py-3 shadow-sm" data-trip={trip.code}>
       <div className="flex items-baseline justify-between gap-2">
         <span className="font-mono text-base font-semibold text-sky-900">{trip.code}</span>
-        <span className="text-sm text-slate-600">{trip.days === 1 ? "1 day" : `${trip.days} days`}</span>
+        <span className="text-sm text-slate-600">
+          {trip.days === 1 ? "1 day" : `${trip.days} days`} · <span className="font-mono text-slate-900">{hhmm(trip.creditMinutes)}</span> credit
+        </span>
       </div>
-      <p className="mt-1 text-sm font-medium">{dates}</p>
-      <dl className="mt-3 grid grid-cols-2 gap-x-3 gap-y-1 text-sm">
-        <dt className="text-slate-500">Report</dt>
-        <dd className="font-mono">{trip.report}</dd>
-        <dt className="text-slate-500">Release</dt>
-        <dd className="font-mono">{trip.release}</dd>
-        <dt className="text-slate-500">Credit</dt>
-        <dd className="font-mono">{hhmm(trip.creditMinutes)}</dd>
-        <dt className="text-slate-500">Layovers</dt>
-        <dd>{trip.layovers.length ? trip.layovers.join(", ") : "none"}</dd>
-        <dt className="text-slate-500">Legs</dt>
-        <dd>
-          {trip.legs}
-          {trip.deadheads ? ` (${trip.deadheads} deadhead)` : ""}
-        </dd>
+      <p className="mt-0.5 text-sm font-medium">
+        {dates}
+        {trip.redEye ? <span className="ml-2 rounded bg-slate-800 px-1.5 py-0.5 text-xs font-medium text-white">red-eye</span> : null}
+      </p>
+      <dl className="mt-1.5 flex flex-wrap gap-x-4 gap-y-0.5 text-sm text-slate-700">
+        <div className="flex gap-1">
+          <dt className="text-slate-500">Report</dt>
+          <dd className="font-mono">{trip.report}</dd>
+        </div>
+        <div className="flex gap-1">
+          <dt className="text-slate-500">Release</dt>
+          <dd className="font-mono">{trip.release}</dd>
+        </div>
+        <div className="flex gap-1">
+          <dt className="text-slate-500">Layovers</dt>
+          <dd>{trip.layovers.length ? trip.layovers.join(", ") : "none"}</dd>
+        </div>
+        <div className="flex gap-1">
+          <dt className="text-slate-500">Legs</dt>
+          <dd>
+            {trip.legs}
+            {trip.deadheads ? ` (${trip.deadheads} deadhead)` : ""}
+          </dd>
+        </div>
       </dl>
     </li>
   );

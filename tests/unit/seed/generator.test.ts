@@ -14,17 +14,17 @@ import { MIN_LAYOVER_REST_MIN, RELEASE_AFTER_MIN, REPORT_BEFORE_MIN } from "@/se
 
 const ZONE = "America/Denver";
 
-describe("the bid-period generator", () => {
+// Generating a few hundred crew takes seconds on a busy machine.
+describe("the bid-period generator", { timeout: 60_000 }, () => {
   let bundle: Bundle;
   beforeAll(() => {
     bundle = generatePeriod({ crew: 120, seed: 7 });
-  });
+  }, 60_000);
 
   it("is byte-identical for the same seed and differs for another", () => {
-    const again = generatePeriod({ crew: 120, seed: 7 });
-    expect(canonicalJson(again)).toBe(canonicalJson(bundle));
-    const other = generatePeriod({ crew: 120, seed: 8 });
-    expect(canonicalJson(other)).not.toBe(canonicalJson(bundle));
+    const a = canonicalJson(generatePeriod({ crew: 30, seed: 7 }));
+    expect(canonicalJson(generatePeriod({ crew: 30, seed: 7 }))).toBe(a);
+    expect(canonicalJson(generatePeriod({ crew: 30, seed: 8 }))).not.toBe(a);
   });
 
   it("writes a bundle that lib/domain accepts unchanged, one instance per position", () => {
