@@ -2,7 +2,8 @@
  * A greedy line filler for tests: in seniority order, each crew member takes
  * trips in time order while the line stays within three simple limits — no
  * overlap (with other trips, fixed activities or carry-in), a minimum rest
- * between trips, and a credit maximum. It builds plausible lines for tests of
+ * between trips (and around carry-in, training and office duty), and a credit
+ * maximum. It builds plausible lines for tests of
  * later parts (scoring, explanations, calendars); it is not an award method
  * and knows nothing of wishes or the legality engine.
  */
@@ -42,8 +43,12 @@ export function greedyLines(instance: Instance, limits: GreedyLimits = {}): Gree
   const lines: Record<string, string[]> = {};
   for (const crew of [...instance.crew].sort((a, b) => a.seniority - b.seniority)) {
     // Fixed activities and carry-in block their time, with rest around carry-in.
+    // Training and office days are duty: they need the same rest around them.
     const blocked: Span[] = [
-      ...crew.fixedActivities.map((a) => ({ start: instantMs(a.start), end: instantMs(a.end) })),
+      ...crew.fixedActivities.map((a) => {
+        const pad = a.kind === "training" || a.kind === "office" ? rest : 0;
+        return { start: instantMs(a.start) - pad, end: instantMs(a.end) + pad };
+      }),
       ...crew.carryIn.map((c) => ({ start: span(c).start - rest, end: span(c).end + rest })),
     ];
     const taken: Span[] = [];

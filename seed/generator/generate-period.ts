@@ -27,7 +27,7 @@ export function generatePeriod(input: GeneratorInput = {}): Bundle {
   const flightNo = () => (flight += flightRng.int(1, 7));
   const crew = makeCrew({ params, zone, endDate, flightNo }, rng(params.seed * 7919 + 1));
   const perPosition = capacityMinutes(crew, params, zone) / params.positions.length;
-  const pairings = makePairings(params, perPosition, rng(params.seed * 7919 + 2), flightNo);
+  const pairings = makePairings(params, perPosition, rng(params.seed * 7919 + 2), flightNo, zone);
   const appeal = new Map(pairings.map((p) => [p.id, tripAppeal(p, zone)]));
   const ranked = [...pairings].sort((a, b) => appeal.get(b.id)! - appeal.get(a.id)! || a.id.localeCompare(b.id));
   const bids = makeBids(crew, { params, zone, endDate, ranked }, rng(params.seed * 7919 + 4));

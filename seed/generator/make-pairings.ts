@@ -4,12 +4,14 @@
  * fixed count, or as many as it takes for the trip credit to reach
  * `tightness` × crew capacity.
  */
-import type { CrewMember, Pairing } from "../../lib/domain/index.ts";
+import type { CrewMember, Pairing, RuleSet } from "../../lib/domain/index.ts";
 import { addDays, instantMs, startOfLocalDay } from "../../lib/domain/time.ts";
-import { OCEANIC, OCEANIC_QUALIFICATION } from "../carrier.ts";
+import { REGISTRY, checkLine } from "../../lib/rules/index.ts";
+import { OCEANIC, OCEANIC_QUALIFICATION, STATIONS } from "../carrier.ts";
 import { makePairing } from "../pairing-factory.ts";
 import type { Rng } from "../random.ts";
 import { CREW_PER_PAIRING, type GeneratorParams } from "./params.ts";
+import { ruleSetFor } from "./rule-set-presets.ts";
 
 /** Share of trips by length in days (a domestic base: short trips dominate). */
 const LENGTHS: ReadonlyArray<readonly [number, number]> = [[1, 0.36], [2, 0.3], [3, 0.2], [4, 0.1], [5, 0.04]];
@@ -41,7 +43,25 @@ export function capacityMinutes(crew: readonly CrewMember[], params: GeneratorPa
   }, 0);
 }
 
-export function makePairings(params: GeneratorParams, capacityPerPosition: number, r: Rng, flightNo: () => number): Pairing[] {
+/**
+ * Whether a pairing on its own keeps every duty and rest limit of the rule
+ * sets its positions fly under (line rules such as the credit window are the
+ * line's business, not the trip's).
+ */
+function legalAlone(p: Pairing, ruleSets: readonly RuleSet[], params: GeneratorParams, zone: string): boolean {
+  const crew = { id: "0", name: "check", seniority: 1, base: params.base, position: params.positions[0]!, qualifications: [], fixedActivities: [], carryIn: [], lookBack: { duties: [], dailyFlightMinutes: [] }, carriedWeight: 1 };
+  const ctx = { stations: STATIONS, zone, periodStart: params.startDate, periodEnd: addDays(params.startDate, params.days - 1) };
+  return ruleSets.every((rs) => checkLine(crew, rs, [{ kind: "pairing", pairing: p }], ctx).legal);
+}
+
+/** The duty and rest rules of each distinct preset the positions fly under. */
+function dutyRuleSets(params: GeneratorParams): RuleSet[] {
+  const byPreset = new Map(params.positions.map((pos) => [ruleSetFor(pos).preset, ruleSetFor(pos)]));
+  return [...byPreset.values()].map((rs) => ({ ...rs, rules: rs.rules.filter((rule) => !REGISTRY.get(String(rule.params.check ?? rule.id))?.onLine) }));
+}
+
+export function makePairings(params: GeneratorParams, capacityPerPosition: number, r: Rng, flightNo: () => number, zone: string): Pairing[] {
+  const ruleSets = dutyRuleSets(params);
   const crewNeeded = Object.fromEntries(params.positions.map((p) => [p, CREW_PER_PAIRING[p]]));
   const target = params.pairings ?? Infinity;
   const creditGoal = params.pairings ? Infinity : params.tightness * capacityPerPosition;
@@ -68,6 +88,8 @@ export function makePairings(params: GeneratorParams, capacityPerPosition: numbe
       r,
       flightNo,
     );
+    // The factory keeps rough limits; the legality engine has the last word. Draw again when it says no.
+    if (!legalAlone(p, ruleSets, params, zone)) continue;
     if (p.dutyPeriods.some((d) => d.legs.some((l) => OCEANIC.has(l.to)))) p.requires = ["A220", OCEANIC_QUALIFICATION];
     pairings.push(p);
     credit += p.creditMinutes;

@@ -39,7 +39,7 @@ export function kasirzadehRuleSet(): RuleSet {
     rules: [
       {
         id: "min-rest-in-pairing",
-        params: { minMinutes: MIN_REST_IN_PAIRING_MIN, measuredOn },
+        params: { check: "min-rest", minMinutes: MIN_REST_IN_PAIRING_MIN, measuredOn, withinTripOnly: true },
         text: "Inside a pairing, at least 8 h pass between the last arrival of one duty period and the first departure of the next.",
       },
       {

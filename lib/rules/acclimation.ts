@@ -1,0 +1,48 @@
+/**
+ * Acclimation per 14 CFR 117.3: a theater is a region within 60° of
+ * longitude; a crew member is acclimated to a new theater after 72 hours in it,
+ * or after 36 consecutive hours free from duty in it. Until then, limits read
+ * the clock of the theater where they were last acclimated (117.13(b)). A line
+ * starts acclimated to the base's theater, where its crew live.
+ */
+import type { Duty } from "./duty.ts";
+import type { RuleEnv } from "./rule.ts";
+
+const HOUR = 3_600_000;
+
+export interface Acclimation {
+  acclimated: boolean;
+  /** the zone whose clock the duty tables read */
+  zone: string;
+}
+
+/** Acclimation at the report of duties[k], walking the duties from the first. */
+export function acclimationAt(duties: readonly Duty[], k: number, env: RuleEnv): Acclimation {
+  const station = (code: string | undefined) => (code ? env.stations.get(code) : undefined);
+  const lonOf = (code: string) => station(code)?.longitude ?? station(env.crew.base)?.longitude ?? 0;
+  const sameTheater = (a: number, b: number) => Math.abs(a - b) <= 60;
+  let acclimatedLon = lonOf(env.crew.base);
+  let acclimatedZone = env.zone;
+  let here = env.crew.base;
+  let arrivedAt = -Infinity; // when the crew member reached the theater they are in
+  let longestFree = 0; // their longest stretch free from duty there since
+  for (let i = 0; ; i++) {
+    const d = duties[i]!;
+    const prev = duties[i - 1];
+    if (prev) longestFree = Math.max(longestFree, d.report - prev.release);
+    if (!sameTheater(lonOf(here), acclimatedLon) && (d.report - arrivedAt >= 72 * HOUR || longestFree >= 36 * HOUR)) {
+      acclimatedLon = lonOf(here);
+      acclimatedZone = station(here)?.zone ?? env.zone;
+    }
+    if (i === k) {
+      const acclimated = sameTheater(lonOf(here), acclimatedLon);
+      return { acclimated, zone: acclimated ? (station(d.from ?? here)?.zone ?? env.zone) : acclimatedZone };
+    }
+    const next = d.to ?? here;
+    if (!sameTheater(lonOf(next), lonOf(here))) {
+      arrivedAt = d.release;
+      longestFree = 0;
+    }
+    here = next;
+  }
+}

@@ -1,0 +1,67 @@
+import { z } from "zod";
+import { addDays, localDate } from "../../domain/time.ts";
+import { hm, type RuleImpl } from "../rule.ts";
+import { HOUR, MINUTE, cite, itemsOf, overlapMinutes, reference } from "./shared.ts";
+
+const params = z
+  .object({
+    /** what is added up: flight duty periods, all duty, or scheduled flight time */
+    measure: z.enum(["fdp", "duty", "flight"]),
+    /** a rolling window of consecutive hours (168, 672, …) … */
+    windowHours: z.number().int().min(1).optional(),
+    /** … or of consecutive base-local calendar days (365 for 14 CFR 117.23(b)) */
+    windowDays: z.number().int().min(1).optional(),
+    maxMinutes: z.number().int().min(1),
+    reference,
+  })
+  .strict()
+  .refine((p) => (p.windowHours === undefined) !== (p.windowDays === undefined), { message: "give windowHours or windowDays" });
+
+const label = { fdp: "flight duty", duty: "duty", flight: "flight time" } as const;
+
+/**
+ * A cumulative limit over a rolling window, checked on every window that ends
+ * as a new duty ends: the sum only grows with the duty, so those windows are
+ * the ones a new duty can break.
+ */
+export const cumulative: RuleImpl<z.infer<typeof params>> = {
+  id: "cumulative-limit",
+  params,
+  onDuty({ duties, params: p, env, dailyFlight }) {
+    const d = duties[duties.length - 1]!;
+    if (d.source.kind === "look-back") return [];
+    let total = 0;
+    let window: string;
+    if (p.windowHours !== undefined) {
+      const from = d.release - p.windowHours * HOUR;
+      for (const x of duties) {
+        if (x.release <= from) continue;
+        if (p.measure === "flight") total += x.flightMinutes; // a duty's flying counts where the duty ends in the window
+        else if (p.measure === "duty" || x.flight) total += overlapMinutes(x, from, d.release);
+      }
+      window = `${p.windowHours} consecutive hours`;
+    } else {
+      // Calendar days: flight time by the base-local date of each duty's report.
+      const last = localDate(new Date(d.report).toISOString(), env.zone);
+      const first = addDays(last, -(p.windowDays! - 1));
+      for (const [date, minutes] of dailyFlight) if (date >= first && date <= last) total += minutes;
+      for (const x of duties) {
+        if (x.source.kind === "look-back") continue; // already in the daily totals
+        const date = localDate(new Date(x.report).toISOString(), env.zone);
+        if (date >= first && date <= last) total += p.measure === "flight" ? x.flightMinutes : (x.release - x.report) / MINUTE;
+      }
+      window = `${p.windowDays} consecutive days`;
+    }
+    if (total <= p.maxMinutes) return [];
+    return [
+      {
+        ruleId: "cumulative-limit",
+        measured: total,
+        limit: p.maxMinutes,
+        unit: "minutes",
+        items: itemsOf(d),
+        text: `with ${itemsOf(d)[0]}, ${label[p.measure]} in ${window} reaches ${hm(total)}; at most ${hm(p.maxMinutes)} is allowed${cite(p.reference)}`,
+      },
+    ];
+  },
+};

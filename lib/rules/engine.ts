@@ -1,0 +1,167 @@
+/**
+ * The legality engine: a line (pairings and fixed activities, carry-in and
+ * look-back from the crew member) checked against a rule set. One code path:
+ * `checkLine` is `start` + `extend` for every item in time order + `finish`,
+ * so the incremental form the award engine uses can never disagree with it.
+ */
+import type { CrewMember, FixedActivity, Pairing, RuleSet, Station } from "../domain/index.ts";
+import { instantMs } from "../domain/time.ts";
+import { noOverlap } from "./checks/no-overlap.ts";
+import { activityDuty, historyDuties, pairingDuties, type Duty, type LineItem } from "./duty.ts";
+import { bindRules, type BoundRule } from "./registry.ts";
+import type { RuleEnv, Violation } from "./rule.ts";
+
+export interface EngineContext {
+  stations: readonly Station[];
+  periodStart: string;
+  periodEnd: string;
+  /** the base's zone */
+  zone: string;
+}
+
+/** The engine's state after some items; treat as opaque and immutable. */
+export interface LineState {
+  env: RuleEnv;
+  rules: BoundRule[];
+  duties: Duty[];
+  pairings: Pairing[];
+  dailyFlight: Map<string, number>;
+  historyCount: number;
+}
+
+export type LineResult = { legal: true } | { legal: false; violations: Violation[] };
+
+const bound = new WeakMap<RuleSet, BoundRule[]>();
+const stationMaps = new WeakMap<readonly Station[], Map<string, Station>>();
+
+function rulesOf(ruleSet: RuleSet): BoundRule[] {
+  let rules = bound.get(ruleSet);
+  if (!rules) {
+    rules = bindRules(ruleSet.rules);
+    bound.set(ruleSet, rules);
+  }
+  return rules;
+}
+
+function stationMap(stations: readonly Station[]): Map<string, Station> {
+  let m = stationMaps.get(stations);
+  if (!m) {
+    m = new Map(stations.map((s) => [s.code, s]));
+    stationMaps.set(stations, m);
+  }
+  return m;
+}
+
+/** A fresh line for a crew member: their history is in, nothing of the period yet. */
+export function start(crew: CrewMember, ruleSet: RuleSet, ctx: EngineContext): LineState {
+  const env: RuleEnv = { crew, zone: ctx.zone, stations: stationMap(ctx.stations), periodStart: ctx.periodStart, periodEnd: ctx.periodEnd };
+  const history = historyDuties(crew);
+  const state: LineState = {
+    env,
+    rules: rulesOf(ruleSet),
+    duties: [],
+    pairings: [],
+    dailyFlight: new Map(crew.lookBack.dailyFlightMinutes.map((d) => [d.date, d.minutes])),
+    historyCount: 0,
+  };
+  // Carry-in duties are checked like the line's own (they are flown in the period);
+  // look-back duties only fill the history.
+  let s = state;
+  for (const d of history) s = push(s, d, d.source.kind === "carry-in").state;
+  return { ...s, historyCount: s.duties.length };
+}
+
+function push(state: LineState, d: Duty, check: boolean): { state: LineState; violations: Violation[] } {
+  const duties = [...state.duties, d];
+  const next = { ...state, duties };
+  if (!check) return { state: next, violations: [] };
+  const violations: Violation[] = [];
+  const all = [{ rule: { id: "no-overlap" }, impl: noOverlap as never, params: {} }, ...state.rules] as BoundRule[];
+  for (const r of all) {
+    const found = r.impl.onDuty?.({ env: state.env, params: r.params, duties, dailyFlight: state.dailyFlight }) ?? [];
+    for (const v of found) violations.push({ ...v, ruleId: r.rule.id });
+  }
+  return { state: next, violations };
+}
+
+function dutiesOfItem(item: LineItem): Duty[] {
+  if (item.kind === "pairing") return pairingDuties(item.pairing);
+  const d = activityDuty(item.activity);
+  return d ? [d] : [];
+}
+
+/** Adds one item, collecting every violation it causes. Items must come in time order. */
+export function extendAll(state: LineState, item: LineItem): { state: LineState; violations: Violation[] } {
+  let s = state;
+  const violations: Violation[] = [];
+  for (const d of dutiesOfItem(item)) {
+    const r = push(s, d, true);
+    s = r.state;
+    violations.push(...r.violations);
+  }
+  if (item.kind === "pairing") s = { ...s, pairings: [...s.pairings, item.pairing] };
+  return { state: s, violations };
+}
+
+/** Adds one item; the first violation it causes, or the new state. */
+export function extend(state: LineState, item: LineItem): LineState | Violation {
+  const r = extendAll(state, item);
+  return r.violations[0] ?? r.state;
+}
+
+/** The line-level rules (credit window, days off, days on) on the finished line. */
+export function finish(state: LineState, opts: { reserve?: boolean } = {}): LineResult {
+  const violations: Violation[] = [];
+  const lineDuties = state.duties.filter((d) => d.source.kind !== "look-back");
+  for (const r of state.rules) {
+    const found = r.impl.onLine?.({ env: state.env, params: r.params, duties: lineDuties, pairings: state.pairings, reserve: opts.reserve ?? false }) ?? [];
+    for (const v of found) violations.push({ ...v, ruleId: r.rule.id });
+  }
+  return violations.length ? { legal: false, violations } : { legal: true };
+}
+
+const itemStart = (item: LineItem) =>
+  item.kind === "pairing" ? instantMs(item.pairing.dutyPeriods[0]!.report) : instantMs(item.activity.start);
+
+/** Every violation of a line, items in any order; fixed activities of the crew member are added. */
+export function checkLine(
+  crew: CrewMember,
+  ruleSet: RuleSet,
+  items: readonly LineItem[],
+  ctx: EngineContext,
+  opts: { reserve?: boolean } = {},
+): LineResult {
+  const activities: LineItem[] = crew.fixedActivities.map((activity: FixedActivity) => ({ kind: "activity", activity }));
+  const ordered = [...activities, ...items].sort((a, b) => itemStart(a) - itemStart(b) || itemKey(a).localeCompare(itemKey(b)));
+  let state = start(crew, ruleSet, ctx);
+  const violations: Violation[] = [];
+  for (const item of ordered) {
+    const r = extendAll(state, item);
+    state = r.state;
+    violations.push(...r.violations);
+  }
+  const end = finish(state, opts);
+  if (!end.legal) violations.push(...end.violations);
+  return violations.length ? { legal: false, violations } : { legal: true };
+}
+
+const itemKey = (item: LineItem) => (item.kind === "pairing" ? `p:${item.pairing.id}` : `a:${item.activity.kind}:${item.activity.start}`);
+
+/**
+ * May pairing `b` follow pairing `a` in one line, on the rules that look at two
+ * neighbouring duties only (rest, overlap)? Cheap: no history, no line rules.
+ */
+export function canFollow(crew: CrewMember, ruleSet: RuleSet, a: Pairing, b: Pairing, ctx: EngineContext): boolean {
+  const last = pairingDuties(a).at(-1)!;
+  const first = pairingDuties(b)[0]!;
+  if (first.report < last.release) return false;
+  const env: RuleEnv = { crew, zone: ctx.zone, stations: stationMap(ctx.stations), periodStart: ctx.periodStart, periodEnd: ctx.periodEnd };
+  const duties = [last, first];
+  for (const r of rulesOf(ruleSet)) {
+    if (!r.impl.pairwise || !r.impl.onDuty) continue;
+    if (r.impl.onDuty({ env, params: r.params, duties, dailyFlight: EMPTY }).length) return false;
+  }
+  return true;
+}
+
+const EMPTY = new Map<string, number>();
