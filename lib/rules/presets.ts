@@ -9,9 +9,20 @@ import type { Rule, RuleSet } from "../domain/index.ts";
 
 export type PresetId = "us-flightcrew" | "us-cabin" | "eu-crew";
 
-/** Agreement rules, common practice: credit window, days off (reserve: 12 per 30 days), days on in a row. */
-export function agreementRules(o: { minCredit?: number; maxCredit?: number; daysOff?: number; maxDaysOn?: number } = {}): Rule[] {
+/**
+ * Agreement rules, common practice: credit window, days off (reserve: 12 per
+ * 30 days), days on in a row, rest at base between trips; with `daysBetweenTrips`,
+ * whole calendar days free between trips.
+ */
+export function agreementRules(
+  o: { minCredit?: number; maxCredit?: number; daysOff?: number; maxDaysOn?: number; restAtBase?: number; daysBetweenTrips?: number } = {},
+): Rule[] {
+  const between: Rule[] = o.daysBetweenTrips
+    ? [{ id: "days-between-trips", params: { days: o.daysBetweenTrips }, text: `At least ${o.daysBetweenTrips} whole calendar days free between trips (agreement).` }]
+    : [];
   return [
+    { id: "rest-at-base", params: { check: "min-rest", minMinutes: o.restAtBase ?? 720, betweenTripsOnly: true }, text: "At least 12 hours of rest at base between trips (agreement, common practice)." },
+    ...between,
     { id: "credit-window", params: { minMinutes: o.minCredit ?? 65 * 60, maxMinutes: o.maxCredit ?? 95 * 60 }, text: "A line holds between 65 and 95 hours of credit (agreement)." },
     { id: "min-days-off", params: { days: o.daysOff ?? 10, reserveDays: 12, per30Days: true }, text: "At least 10 days off per 30 days in the period; 12 on a reserve line (agreement, common practice)." },
     { id: "max-days-on", params: { days: o.maxDaysOn ?? 6 }, text: "At most 6 duty days in a row (agreement)." },
@@ -42,6 +53,7 @@ const EU_CREW: Rule[] = [
   { id: "duty-110-in-14-days", params: { check: "cumulative-limit", measure: "duty", windowHours: 336, maxMinutes: 6600, reference: "ORO.FTL.210(a)(2)" }, text: "At most 110 duty hours in any 14 consecutive days." },
   { id: "duty-190-in-28-days", params: { check: "cumulative-limit", measure: "duty", windowHours: 672, maxMinutes: 11400, reference: "ORO.FTL.210(a)(3)" }, text: "At most 190 duty hours in any 28 consecutive days." },
   { id: "flight-100-in-28-days", params: { check: "cumulative-limit", measure: "flight", windowHours: 672, maxMinutes: 6000, reference: "ORO.FTL.210(b)(1)" }, text: "At most 100 hours of flight time in any 28 consecutive days." },
+  { id: "recovery-rest", params: { minHours: 36, nights: 2, maxGapHours: 168, reference: "ORO.FTL.235(d)" }, text: "A recovery rest of at least 36 hours with 2 local nights, at most 168 hours before every duty." },
 ];
 
 const PRESETS: Record<PresetId, { name: string; description: string; rules: Rule[] }> = {

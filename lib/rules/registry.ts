@@ -6,6 +6,8 @@
 import type { Rule } from "../domain/index.ts";
 import { AppError } from "../domain/index.ts";
 import { cumulative } from "./checks/cumulative.ts";
+import { daysBetweenTrips } from "./checks/days-between-trips.ts";
+import { recoveryRest } from "./checks/recovery-rest.ts";
 import { fdpTable } from "./checks/fdp-table.ts";
 import { flightTimeTable } from "./checks/flight-time-table.ts";
 import { freePeriod } from "./checks/free-period.ts";
@@ -15,7 +17,7 @@ import { minRest } from "./checks/min-rest.ts";
 import type { RuleImpl } from "./rule.ts";
 
 const IMPLEMENTATIONS: readonly RuleImpl<never>[] = [
-  minRest, maxDuty, fdpTable, flightTimeTable, cumulative, freePeriod, creditWindow, minDaysOff, maxDaysOn,
+  minRest, maxDuty, fdpTable, flightTimeTable, cumulative, freePeriod, recoveryRest, creditWindow, minDaysOff, maxDaysOn, daysBetweenTrips,
 ] as unknown as RuleImpl<never>[];
 
 export const REGISTRY: ReadonlyMap<string, RuleImpl<unknown>> = new Map(IMPLEMENTATIONS.map((r) => [r.id, r as RuleImpl<unknown>]));

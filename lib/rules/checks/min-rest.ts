@@ -15,8 +15,10 @@ const params = z
     before: z.enum(["fdp", "any"]).default("any"),
     /** "duty": release to report; "legs": last arrival to next departure (a data set's own measure) */
     measuredOn: z.enum(["duty", "legs"]).default("duty"),
-    /** only between duty periods of one trip (a layover) */
+    /** only between duty periods of one trip (a layover) … */
     withinTripOnly: z.boolean().default(false),
+    /** … or only between trips (the rest at base an agreement asks for) */
+    betweenTripsOnly: z.boolean().default(false),
     reference,
   })
   .strict();
@@ -32,7 +34,7 @@ export const minRest: RuleImpl<z.infer<typeof params>> = {
     if (!prev) return [];
     if (p.before === "fdp" && !d.flight) return [];
     const sameTrip = prev.source.kind === d.source.kind && prev.source.id === d.source.id;
-    if (p.withinTripOnly && !sameTrip) return [];
+    if ((p.withinTripOnly && !sameTrip) || (p.betweenTripsOnly && sameTrip)) return [];
     const endsAtBase = prev.to === undefined || prev.to === env.crew.base;
     let need = (endsAtBase ? p.atBaseMinutes : p.awayMinutes) ?? p.minMinutes ?? 0;
     if (p.atLeastPrecedingDuty) need = Math.max(need, (prev.release - prev.report) / MINUTE);
