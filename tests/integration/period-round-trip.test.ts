@@ -21,7 +21,7 @@ import {
   type RuleSet,
 } from "@/lib/domain/index";
 import { STATIONS } from "@/seed/carrier";
-import { smallScenario } from "@/seed/small-scenario";
+import { smallScenario, smallScenarioBundle } from "@/seed/small-scenario";
 import { truncateAll } from "../support/reset";
 
 // A fixed clock: 2026-12-01 places the bid period in January 2027 (base HLV, America/Denver).
@@ -66,20 +66,10 @@ function scenarioBundle(): Bundle {
   const pairings: Pairing[] = scenario.pairings
     .map((p, k) => (k === 3 ? { ...p, crewNeeded: { captain: 1 } } : p))
     .sort((a, b) => instantMs(a.dutyPeriods[0]!.report) - instantMs(b.dutyPeriods[0]!.report) || (a.id < b.id ? -1 : 1));
-  const crew: CrewMember[] = scenario.crew.map((c) => ({
-    id: c.id,
-    name: c.name,
-    seniority: c.seniority,
-    base: c.base,
-    position: c.position,
-    qualifications: c.qualifications,
-    fixedActivities: c.vacation
-      ? [{ kind: "vacation", start: startOfLocalDay(c.vacation.start, ZONE), end: startOfLocalDay(addDays(c.vacation.end, 1), ZONE), label: "Annual leave" }]
-      : [],
-    carryIn: [],
-    lookBack: { duties: [], dailyFlightMinutes: [] },
-    carriedWeight: 1,
-  }));
+  // The scenario's crew as the bundle writer makes them (structuredClone: the extras below change them).
+  const crew: CrewMember[] = structuredClone(smallScenarioBundle(scenario).instances.flatMap((i) => i.crew)).sort(
+    (a, b) => a.seniority - b.seniority,
+  );
   const [c0, c1, c2, c3, , c5] = crew as [CrewMember, CrewMember, CrewMember, CrewMember, CrewMember, CrewMember];
   c0.carryIn = [{ pairingId: "T099", dutyPeriods: [duty("2026-12-31", "15:10", "HLV", "PSB", 150), duty("2027-01-01", "09:00", "PSB", "HLV", 150)] }];
   c0.fixedActivities.push({ kind: "training", start: atLocalTime("2027-01-15", "08:00", ZONE), end: atLocalTime("2027-01-15", "16:00", ZONE) });
