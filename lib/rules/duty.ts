@@ -72,8 +72,12 @@ export function activityDuty(a: FixedActivity): Duty | undefined {
   return { source: { kind: "activity", id: a.kind, index: 0 }, report: instantMs(a.start), release: instantMs(a.end), flight: false, segments: 0, flightMinutes: 0 };
 }
 
-/** The crew member's history before the period: look-back duties, then carry-in trips' duties. */
-export function historyDuties(crew: CrewMember): Duty[] {
+/**
+ * The crew member's history: look-back duties, carry-in trips' duties and the
+ * training or office duty that ended before the period (`periodStartMs`), in
+ * time order.
+ */
+export function historyDuties(crew: CrewMember, periodStartMs: number): Duty[] {
   const past = crew.lookBack.duties.map(
     (d, index): Duty => ({
       source: { kind: "look-back", id: "look-back", index },
@@ -86,7 +90,8 @@ export function historyDuties(crew: CrewMember): Duty[] {
     }),
   );
   const carry = crew.carryIn.flatMap((t) => t.dutyPeriods.map((d, index) => dutyOf(d, { kind: "carry-in", id: t.pairingId, index })));
-  return [...past, ...carry].sort((a, b) => a.report - b.report);
+  const before = crew.fixedActivities.flatMap((a) => (instantMs(a.end) <= periodStartMs ? [activityDuty(a)].filter((d): d is Duty => !!d) : []));
+  return [...past, ...carry, ...before].sort((a, b) => a.report - b.report);
 }
 
 /** "trip T412", "carry-in trip C1", "training" — how a message names a duty's source. */

@@ -5,7 +5,7 @@
  * so the incremental form the award engine uses can never disagree with it.
  */
 import type { CrewMember, FixedActivity, Pairing, RuleSet, Station } from "../domain/index.ts";
-import { instantMs } from "../domain/time.ts";
+import { instantMs, startOfLocalDay } from "../domain/time.ts";
 import { noOverlap } from "./checks/no-overlap.ts";
 import { activityDuty, historyDuties, pairingDuties, type Duty, type LineItem } from "./duty.ts";
 import { bindRules, type BoundRule } from "./registry.ts";
@@ -55,7 +55,7 @@ function stationMap(stations: readonly Station[]): Map<string, Station> {
 /** A fresh line for a crew member: their history is in, nothing of the period yet. */
 export function start(crew: CrewMember, ruleSet: RuleSet, ctx: EngineContext): LineState {
   const env: RuleEnv = { crew, zone: ctx.zone, stations: stationMap(ctx.stations), periodStart: ctx.periodStart, periodEnd: ctx.periodEnd };
-  const history = historyDuties(crew);
+  const history = historyDuties(crew, periodStartMs(ctx));
   const state: LineState = {
     env,
     rules: rulesOf(ruleSet),
@@ -64,10 +64,10 @@ export function start(crew: CrewMember, ruleSet: RuleSet, ctx: EngineContext): L
     dailyFlight: new Map(crew.lookBack.dailyFlightMinutes.map((d) => [d.date, d.minutes])),
     historyCount: 0,
   };
-  // Carry-in duties are checked like the line's own (they are flown in the period);
-  // look-back duties only fill the history.
+  // History is not judged itself (it was flown or awarded already); the line's
+  // own duties are judged against it, carry-in included.
   let s = state;
-  for (const d of history) s = push(s, d, d.source.kind === "carry-in").state;
+  for (const d of history) s = push(s, d, false).state;
   return { ...s, historyCount: s.duties.length };
 }
 
@@ -131,7 +131,11 @@ export function checkLine(
   ctx: EngineContext,
   opts: { reserve?: boolean } = {},
 ): LineResult {
-  const activities: LineItem[] = crew.fixedActivities.map((activity: FixedActivity) => ({ kind: "activity", activity }));
+  // Activities that ended before the period are history (start() holds them).
+  const from = periodStartMs(ctx);
+  const activities: LineItem[] = crew.fixedActivities
+    .filter((a: FixedActivity) => instantMs(a.end) > from)
+    .map((activity: FixedActivity) => ({ kind: "activity", activity }));
   const ordered = [...activities, ...items].sort((a, b) => itemStart(a) - itemStart(b) || itemKey(a).localeCompare(itemKey(b)));
   let state = start(crew, ruleSet, ctx);
   const violations: Violation[] = [];
@@ -165,3 +169,7 @@ export function canFollow(crew: CrewMember, ruleSet: RuleSet, a: Pairing, b: Pai
 }
 
 const EMPTY = new Map<string, number>();
+
+function periodStartMs(ctx: EngineContext): number {
+  return instantMs(startOfLocalDay(ctx.periodStart, ctx.zone));
+}

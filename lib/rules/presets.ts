@@ -53,6 +53,9 @@ const EU_CREW: Rule[] = [
   { id: "duty-110-in-14-days", params: { check: "cumulative-limit", measure: "duty", windowHours: 336, maxMinutes: 6600, reference: "ORO.FTL.210(a)(2)" }, text: "At most 110 duty hours in any 14 consecutive days." },
   { id: "duty-190-in-28-days", params: { check: "cumulative-limit", measure: "duty", windowHours: 672, maxMinutes: 11400, reference: "ORO.FTL.210(a)(3)" }, text: "At most 190 duty hours in any 28 consecutive days." },
   { id: "flight-100-in-28-days", params: { check: "cumulative-limit", measure: "flight", windowHours: 672, maxMinutes: 6000, reference: "ORO.FTL.210(b)(1)" }, text: "At most 100 hours of flight time in any 28 consecutive days." },
+  { id: "flight-900-in-calendar-year", params: { check: "cumulative-limit", measure: "flight", calendarYear: true, maxMinutes: 54000, reference: "ORO.FTL.210(b)(2)" }, text: "At most 900 hours of flight time in a calendar year." },
+  // 12 consecutive calendar months are read as 365 consecutive days (366 across a 29 February).
+  { id: "flight-1000-in-12-months", params: { check: "cumulative-limit", measure: "flight", windowDays: 365, maxMinutes: 60000, reference: "ORO.FTL.210(b)(3)" }, text: "At most 1,000 hours of flight time in any 12 consecutive calendar months." },
   { id: "recovery-rest", params: { minHours: 36, nights: 2, maxGapHours: 168, reference: "ORO.FTL.235(d)" }, text: "A recovery rest of at least 36 hours with 2 local nights, at most 168 hours before every duty." },
 ];
 

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { addDays, localDate } from "../../domain/time.ts";
 import { hm, type RuleImpl } from "../rule.ts";
-import { HOUR, MINUTE, cite, itemsOf, overlapMinutes, reference } from "./shared.ts";
+import { HOUR, MINUTE, cite, itemsOf, name, overlapMinutes, reference } from "./shared.ts";
 
 const params = z
   .object({
@@ -9,13 +9,17 @@ const params = z
     measure: z.enum(["fdp", "duty", "flight"]),
     /** a rolling window of consecutive hours (168, 672, …) … */
     windowHours: z.number().int().min(1).optional(),
-    /** … or of consecutive base-local calendar days (365 for 14 CFR 117.23(b)) */
+    /** … or of consecutive base-local calendar days (365 for 14 CFR 117.23(b)) … */
     windowDays: z.number().int().min(1).optional(),
+    /** … or the calendar year so far (ORO.FTL.210(b)(2): 900 h in a calendar year) */
+    calendarYear: z.boolean().optional(),
     maxMinutes: z.number().int().min(1),
     reference,
   })
   .strict()
-  .refine((p) => (p.windowHours === undefined) !== (p.windowDays === undefined), { message: "give windowHours or windowDays" });
+  .refine((p) => [p.windowHours, p.windowDays, p.calendarYear || undefined].filter((x) => x !== undefined).length === 1, {
+    message: "give one of windowHours, windowDays or calendarYear",
+  });
 
 const label = { fdp: "flight duty", duty: "duty", flight: "flight time" } as const;
 
@@ -43,14 +47,14 @@ export const cumulative: RuleImpl<z.infer<typeof params>> = {
     } else {
       // Calendar days: flight time by the base-local date of each duty's report.
       const last = localDate(new Date(d.report).toISOString(), env.zone);
-      const first = addDays(last, -(p.windowDays! - 1));
+      const first = p.calendarYear ? `${last.slice(0, 4)}-01-01` : addDays(last, -(p.windowDays! - 1));
       for (const [date, minutes] of dailyFlight) if (date >= first && date <= last) total += minutes;
       for (const x of duties) {
         if (x.source.kind === "look-back") continue; // already in the daily totals
         const date = localDate(new Date(x.report).toISOString(), env.zone);
         if (date >= first && date <= last) total += p.measure === "flight" ? x.flightMinutes : (x.release - x.report) / MINUTE;
       }
-      window = `${p.windowDays} consecutive days`;
+      window = p.calendarYear ? `calendar year ${last.slice(0, 4)}` : `${p.windowDays} consecutive days`;
     }
     if (total <= p.maxMinutes) return [];
     return [
@@ -60,7 +64,7 @@ export const cumulative: RuleImpl<z.infer<typeof params>> = {
         limit: p.maxMinutes,
         unit: "minutes",
         items: itemsOf(d),
-        text: `with ${itemsOf(d)[0]}, ${label[p.measure]} in ${window} reaches ${hm(total)}; at most ${hm(p.maxMinutes)} is allowed${cite(p.reference)}`,
+        text: `with ${name(d)}, ${label[p.measure]} in ${window} reaches ${hm(total)}; at most ${hm(p.maxMinutes)} is allowed${cite(p.reference)}`,
       },
     ];
   },
