@@ -7,3 +7,4 @@ export { REGISTRY, bindRules } from "./registry.ts";
 export type { Violation } from "./rule.ts";
 export { US_117_TABLE_A, US_117_TABLE_B, usTableAMinutes, usTableBMinutes } from "./tables/us-117.ts";
 export { EU_TABLE_2, euTableTwoMinutes } from "./tables/eu-oro-ftl.ts";
+export { requiredDaysOff } from "./checks/line-rules.ts";

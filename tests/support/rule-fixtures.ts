@@ -26,7 +26,7 @@ export const ZONE = "America/Denver";
 export const BERLIN = "Europe/Berlin";
 
 /** The agreement rules every preset carries on top of its regulation. */
-export const AGREEMENT_RULE_IDS = ["credit-window", "min-days-off", "max-days-on"] as const;
+export const AGREEMENT_RULE_IDS = ["credit-window", "min-days-off", "max-days-on", "rest-at-base", "days-between-trips"] as const;
 
 /** A preset with only the named rules left: so that only the rule under test speaks. */
 export function only(preset: PresetId, ...ids: string[]): RuleSet {

@@ -44,8 +44,7 @@ export const minDaysOff: RuleImpl<z.infer<typeof daysOffParams>> = {
   onLine({ duties, env, params: p, reserve }) {
     const dates = periodDates(env.periodStart, env.periodEnd);
     const worked = workedDates(duties, env.zone, env.periodStart, env.periodEnd);
-    const base = reserve ? (p.reserveDays ?? p.days) : p.days;
-    const need = p.per30Days ? Math.ceil((base * dates.length) / 30 - 1e-9) : base;
+    const need = requiredDaysOffOf(p, dates.length, reserve);
     const off = dates.length - worked.size;
     if (off >= need) return [];
     return [{ ruleId: "min-days-off", measured: off, limit: need, unit: "days", items: [...new Set(duties.map((d) => d.source.id))], text: `the line leaves ${off} days off in the period; at least ${need} are required${cite(p.reference)}` }];
@@ -70,3 +69,19 @@ export const maxDaysOn: RuleImpl<z.infer<typeof daysOnParams>> = {
     return [{ ruleId: "max-days-on", measured: longest, limit: p.days, unit: "days", items: [...new Set(duties.map((d) => d.source.id))], text: `the line works ${longest} days in a row; at most ${p.days} are allowed${cite(p.reference)}` }];
   },
 };
+
+/**
+ * The days off a line must leave in a period of `periodDays` days under a rule
+ * set (0 without a min-days-off rule): what a reserve line's days off are.
+ */
+export function requiredDaysOff(rules: readonly { id: string; params: Record<string, unknown> }[], periodDays: number, reserve: boolean): number {
+  const rule = rules.find((r) => (r.params.check ?? r.id) === "min-days-off");
+  if (!rule) return 0;
+  const p = daysOffParams.parse(Object.fromEntries(Object.entries(rule.params).filter(([k]) => k !== "check")));
+  return requiredDaysOffOf(p, periodDays, reserve);
+}
+
+function requiredDaysOffOf(p: z.infer<typeof daysOffParams>, periodDays: number, reserve: boolean): number {
+  const base = reserve ? (p.reserveDays ?? p.days) : p.days;
+  return p.per30Days ? Math.ceil((base * periodDays) / 30 - 1e-9) : base;
+}
