@@ -1,0 +1,3 @@
+// lib/fairness: distribution measures of satisfaction and the fairness report of an award.
+export { gini, jainIndex, mean, percentile } from "./measures.ts";
+export { fairnessReport, type FairnessReport } from "./award-fairness.ts";
