@@ -45,6 +45,8 @@ export interface LineCheck<P> {
   params: P;
   /** the line's own duties (history excluded) */
   duties: readonly Duty[];
+  /** history and the line, time order (for runs that start before the period) */
+  allDuties: readonly Duty[];
   pairings: readonly Pairing[];
   /** true for a reserve line */
   reserve: boolean;
