@@ -24,22 +24,29 @@ export function acclimationAt(duties: readonly Duty[], k: number, env: RuleEnv):
   let acclimatedLon = lonOf(env.crew.base);
   let acclimatedZone = env.zone;
   let here = env.crew.base;
-  let arrivedAt = -Infinity; // when the crew member reached the theater they are in
-  let longestFree = 0; // their longest stretch free from duty there since
+  // A stay away from the acclimated theater: where it began, when, and its longest free stretch.
+  let stayLon: number | undefined;
+  let arrivedAt = Infinity;
+  let longestFree = 0;
   for (let i = 0; ; i++) {
     const d = duties[i]!;
     const prev = duties[i - 1];
-    if (prev) longestFree = Math.max(longestFree, d.report - prev.release);
-    if (!sameTheater(lonOf(here), acclimatedLon) && (d.report - arrivedAt >= 72 * HOUR || longestFree >= 36 * HOUR)) {
+    if (prev && stayLon !== undefined) longestFree = Math.max(longestFree, d.report - prev.release);
+    if (stayLon !== undefined && (d.report - arrivedAt >= 72 * HOUR || longestFree >= 36 * HOUR)) {
       acclimatedLon = lonOf(here);
       acclimatedZone = station(here)?.zone ?? env.zone;
+      stayLon = undefined;
     }
     if (i === k) {
-      const acclimated = sameTheater(lonOf(here), acclimatedLon);
+      const acclimated = stayLon === undefined;
       return { acclimated, zone: acclimated ? (station(d.from ?? here)?.zone ?? env.zone) : acclimatedZone };
     }
     const next = d.to ?? here;
-    if (!sameTheater(lonOf(next), lonOf(here))) {
+    const l = lonOf(next);
+    if (sameTheater(l, acclimatedLon)) stayLon = undefined; // back in the theater the crew is acclimated to
+    else if (stayLon === undefined || !sameTheater(l, stayLon)) {
+      // A new stay: measured from where it began, so short hops add up to a theater change.
+      stayLon = l;
       arrivedAt = d.release;
       longestFree = 0;
     }

@@ -43,3 +43,24 @@ describe("fixed activities are part of the line", () => {
     expect(checkLine(member, rules, items(before), ctx)).toEqual({ legal: true });
   });
 });
+
+describe("acclimation by steps (14 CFR 117.3: a theater is measured from where the crew member is acclimated)", () => {
+  it("two hops of 31° and 50° leave the home theater (81° away): the next report reads the home clock, 30 min less (117.13(b))", async () => {
+    const { STATIONS } = await import("@/seed/carrier");
+    // An invented station at Cape Verde's longitude (-23.5°), 50° from EMR and 81° from HLV.
+    const stations = [...STATIONS, { code: "CVX", name: "Cove Exeter", zone: "Atlantic/Cape_Verde", longitude: -23.5 }];
+    const far = { ...ctx, stations };
+    const only = { ...rules, rules: rules.rules.filter((r) => r.id === "fdp-limit") };
+    // Day 1 lays over at EMR (31° from home); day 2 hops on to CVX (50° further); day 3 reports at CVX.
+    const p = (minutes: number) =>
+      pairing("X1", [
+        duty(at("2027-05-09", "08:00"), [BASE, "EMR"], { minutes: 400, blocks: [230] }),
+        duty(at("2027-05-10", "08:00", "America/New_York"), ["EMR", "CVX"], { minutes: 480, blocks: [300] }),
+        // Reports 10:30 Cape Verde time = 05:30 Denver (MDT), 2 segments back towards home.
+        duty(at("2027-05-11", "10:30", "Atlantic/Cape_Verde"), ["CVX", "EMR", BASE], { minutes, blocks: [300, 230] }),
+      ]);
+    // Table B, 0500–0559 row, 2 segments: 12 h; not acclimated: 11 h 30 min.
+    expect(checkLine(crew(), only, items(p(690)), far)).toEqual({ legal: true });
+    expect(violations(checkLine(crew(), only, items(p(691)), far))[0]).toMatchObject({ ruleId: "fdp-limit", measured: 691, limit: 690 });
+  });
+});
