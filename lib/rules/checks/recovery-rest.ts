@@ -28,7 +28,8 @@ function nightsIn(from: number, to: number, zone: string): number {
 
 /**
  * Recurrent extended recovery rest (ORO.FTL.235(d)): a rest of at least 36 h
- * holding 2 local nights, no more than 168 h before each duty. Time before the
+ * holding 2 local nights; at most 168 h from the end of one to the start of
+ * the next, so every duty must be released within 168 h of the last one. Time before the
  * first duty known (history included) counts as such a rest.
  */
 export const recoveryRest: RuleImpl<z.infer<typeof params>> = {
@@ -44,7 +45,8 @@ export const recoveryRest: RuleImpl<z.infer<typeof params>> = {
       const to = duties[i]!.report;
       if (to - from >= p.minHours * HOUR && nightsIn(from, to, env.zone) >= p.nights) lastEnd = to;
     }
-    const gap = (d.report - lastEnd) / MINUTE;
+    // The next recovery rest can start only after this duty: its release must come within the limit.
+    const gap = (d.release - lastEnd) / MINUTE;
     if (gap <= p.maxGapHours * 60) return [];
     return [
       {
@@ -53,7 +55,7 @@ export const recoveryRest: RuleImpl<z.infer<typeof params>> = {
         limit: p.maxGapHours * 60,
         unit: "minutes",
         items: itemsOf(d),
-        text: `${name(d)} starts ${hm(gap)} after the last rest of ${p.minHours} h with ${p.nights} local nights; at most ${hm(p.maxGapHours * 60)} may pass${cite(p.reference)}`,
+        text: `${name(d)} ends ${hm(gap)} after the last rest of ${p.minHours} h with ${p.nights} local nights; at most ${hm(p.maxGapHours * 60)} may pass before the next such rest${cite(p.reference)}`,
       },
     ];
   },
