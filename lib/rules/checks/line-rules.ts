@@ -5,6 +5,7 @@
 import { z } from "zod";
 import { hm, type RuleImpl } from "../rule.ts";
 import { cite, reference } from "./shared.ts";
+import { addDays } from "../../domain/time.ts";
 import { periodDates, workedDates } from "./line-days.ts";
 
 const creditParams = z.object({ minMinutes: z.number().int().min(0).optional(), maxMinutes: z.number().int().min(0).optional(), reference }).strict();
@@ -53,17 +54,22 @@ export const minDaysOff: RuleImpl<z.infer<typeof daysOffParams>> = {
 
 const daysOnParams = z.object({ days: z.number().int().min(1), reference }).strict();
 
-/** At most so many base-local calendar days with duty in a row. */
+/**
+ * At most so many base-local calendar days with duty in a row, counting the
+ * days worked just before the period (look-back and carry-in): a run that
+ * starts in history and goes on into the period counts whole.
+ */
 export const maxDaysOn: RuleImpl<z.infer<typeof daysOnParams>> = {
   id: "max-days-on",
   params: daysOnParams,
-  onLine({ duties, env, params: p }) {
-    const worked = workedDates(duties, env.zone, env.periodStart, env.periodEnd);
+  onLine({ duties, allDuties, env, params: p }) {
+    const from = addDays(env.periodStart, -(p.days + 1));
+    const worked = workedDates(allDuties, env.zone, from, env.periodEnd);
     let run = 0;
     let longest = 0;
-    for (const date of periodDates(env.periodStart, env.periodEnd)) {
+    for (const date of periodDates(from, env.periodEnd)) {
       run = worked.has(date) ? run + 1 : 0;
-      longest = Math.max(longest, run);
+      if (date >= env.periodStart) longest = Math.max(longest, run); // runs wholly in history are not the line's
     }
     if (longest <= p.days) return [];
     return [{ ruleId: "max-days-on", measured: longest, limit: p.days, unit: "days", items: [...new Set(duties.map((d) => d.source.id))], text: `the line works ${longest} days in a row; at most ${p.days} are allowed${cite(p.reference)}` }];

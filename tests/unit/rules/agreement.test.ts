@@ -57,3 +57,16 @@ describe("agreement rules (common practice, parameters of the rule set)", () => 
     expect(violations(checkLine(crew(), rule, items(dayTrip("2027-05-03"), dayTrip("2027-05-04")), may))[0]).toMatchObject({ ruleId: "days-between-trips", measured: 0, limit: 1 });
   });
 });
+
+describe("days on in a row reach back before the period", () => {
+  it("four look-back days at the end of April and three trips on 1–3 May make 7 in a row", async () => {
+    const { pastDuty } = await import("@/tests/support/rule-fixtures");
+    const rule = only("us-flightcrew", "max-days-on");
+    const member = crew({ lookBack: { duties: ["2027-04-27", "2027-04-28", "2027-04-29", "2027-04-30"].map((d) => pastDuty(at(d, "08:00"), 480, 240)) } });
+    const three = items(dayTrip("2027-05-01"), dayTrip("2027-05-02"), dayTrip("2027-05-03"));
+    expect(violations(checkLine(member, rule, three, may))[0]).toMatchObject({ ruleId: "max-days-on", measured: 7, limit: 6 });
+    // With a day off on 30 April, the run in May is 3 days.
+    const rested = crew({ lookBack: { duties: ["2027-04-26", "2027-04-27", "2027-04-28", "2027-04-29"].map((d) => pastDuty(at(d, "08:00"), 480, 240)) } });
+    expect(violations(checkLine(rested, rule, three, may))).toEqual([]);
+  });
+});
