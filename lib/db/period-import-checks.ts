@@ -22,6 +22,7 @@ import {
   type Position,
   type Station,
 } from "../domain/index";
+import { bindRules } from "../rules/index";
 import { DAILY_FLIGHT_DAYS, LOOK_BACK_DAYS, inWindow, periodWindows } from "./period-windows";
 
 interface Seen<T> {
@@ -161,5 +162,17 @@ export function bundleFitProblems(bundle: Bundle): string[] {
   checkStations(bundle, problems);
   checkPairings(bundle, problems);
   checkCrew(bundle, problems);
+  checkRuleSets(bundle, problems);
   return problems;
+}
+
+/** Every rule set must bind in the legality engine: a known check for each rule, valid parameters. */
+function checkRuleSets(bundle: Bundle, problems: string[]): void {
+  bundle.instances.forEach((instance, k) => {
+    try {
+      bindRules(instance.ruleSet.rules);
+    } catch (e) {
+      problems.push(`instances[${k}].ruleSet ("${instance.ruleSet.name}"): ${(e as Error).message}`);
+    }
+  });
 }

@@ -32,7 +32,7 @@ const PERIOD = { id: "HLV-2027-01", name: scenario.period.name, startDate: scena
 const FLIGHT_DECK: RuleSet = {
   name: "Flight deck (round-trip test)",
   preset: "us-flightcrew",
-  rules: [{ id: "min-rest", params: { minutes: 600 }, text: "At least 10 hours of rest between duty periods." }],
+  rules: [{ id: "min-rest", params: { minMinutes: 600 }, text: "At least 10 hours of rest between duty periods." }],
 };
 
 /** A duty of one leg each way is enough for carry-in; written by hand so the test does not lean on the factory. */
@@ -234,6 +234,14 @@ describe("a bid period exported to a bundle and imported back", () => {
     trip.dutyPeriods[0]!.legs[0]!.to = "ZZZ";
     const before = await counts();
     await expect(importBundle(db(), bad)).rejects.toThrow(new RegExp(`instances\\[0\\]\\.pairings\\[2\\].*"${trip.id}" flies to or from "ZZZ"`));
+    expect(await counts()).toEqual(before);
+  });
+
+  it("refuses a rule set the legality engine cannot read, naming the rule, and writes nothing", async () => {
+    const bad = copy(bundle);
+    bad.instances[1]!.ruleSet = { ...bad.instances[1]!.ruleSet, name: "Broken", rules: [{ id: "min-rest", params: { minutes: 600 }, text: "Rest." }] };
+    const before = await counts();
+    await expect(importBundle(db(), bad)).rejects.toThrow(/instances\[1\]\.ruleSet \("Broken"\): rules\[0\] "min-rest": .*minutes/);
     expect(await counts()).toEqual(before);
   });
 
