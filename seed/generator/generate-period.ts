@@ -10,7 +10,7 @@ import { rng } from "../random.ts";
 import { makeBids, tripAppeal } from "./make-bids.ts";
 import { makeCrew } from "./make-crew.ts";
 import { capacityMinutes, makePairings } from "./make-pairings.ts";
-import { generatorParamsSchema, type GeneratorInput } from "./params.ts";
+import { CREW_PER_PAIRING, generatorParamsSchema, type GeneratorInput } from "./params.ts";
 import { ruleSetFor } from "./rule-set-presets.ts";
 
 const MONTHS = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
@@ -26,8 +26,11 @@ export function generatePeriod(input: GeneratorInput = {}): Bundle {
   const flightRng = rng(params.seed * 7919 + 3);
   const flightNo = () => (flight += flightRng.int(1, 7));
   const crew = makeCrew({ params, zone, endDate, flightNo }, rng(params.seed * 7919 + 1));
-  const perPosition = capacityMinutes(crew, params, zone) / params.positions.length;
-  const pairings = makePairings(params, perPosition, rng(params.seed * 7919 + 2), flightNo, zone);
+  // Trip credit each group can absorb, per crew seat a pairing needs: the tightest group sets the pace.
+  const perSeat = Math.min(
+    ...params.positions.map((pos) => capacityMinutes(crew.filter((c) => c.position === pos), params, zone) / CREW_PER_PAIRING[pos]),
+  );
+  const pairings = makePairings(params, perSeat, rng(params.seed * 7919 + 2), flightNo, zone);
   const appeal = new Map(pairings.map((p) => [p.id, tripAppeal(p, zone)]));
   const ranked = [...pairings].sort((a, b) => appeal.get(b.id)! - appeal.get(a.id)! || a.id.localeCompare(b.id));
   const bids = makeBids(crew, { params, zone, endDate, ranked }, rng(params.seed * 7919 + 4));

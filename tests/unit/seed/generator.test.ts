@@ -114,6 +114,14 @@ describe("the bid-period generator", { timeout: 60_000 }, () => {
     expect(captain.pairings.some((p) => layoverWish?.kind === "trip" && matchesTripFilter(p, layoverWish.filter!, ZONE))).toBe(true);
   });
 
+  it("steers tightness by the tightest group: three flight attendants per trip fill their group first", () => {
+    const mixed = generatePeriod({ crew: 40, seed: 3, positions: ["captain", "flight_attendant"] });
+    const [captains, cabin] = mixed.instances.map((i) => instanceStats(i).tightness) as [number, number];
+    expect(cabin).toBeGreaterThanOrEqual(0.9);
+    expect(cabin).toBeLessThan(0.97);
+    expect(captains).toBeLessThan(cabin / 2);
+  });
+
   it("takes a pairing count instead of a tightness, and a single position gives one instance", () => {
     const small = generatePeriod({ crew: 10, pairings: 40, positions: ["flight_attendant", "purser"], seed: 2 });
     expect(small.instances.map((i) => i.pairings.length)).toEqual([40, 40]);
