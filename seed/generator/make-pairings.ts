@@ -57,7 +57,7 @@ function legalAlone(p: Pairing, ruleSets: readonly RuleSet[], params: GeneratorP
 /** The duty and rest rules of each distinct preset the positions fly under. */
 function dutyRuleSets(params: GeneratorParams): RuleSet[] {
   const byPreset = new Map(params.positions.map((pos) => [ruleSetFor(pos).preset, ruleSetFor(pos)]));
-  return [...byPreset.values()].map((rs) => ({ ...rs, rules: rs.rules.filter((rule) => !REGISTRY.get(String(rule.params.check ?? rule.id))?.onLine) }));
+  return [...byPreset.values()].map((rs) => ({ ...rs, rules: rs.rules.filter((rule) => REGISTRY.get(String(rule.params.check ?? rule.id))?.onDuty !== undefined) }));
 }
 
 export function makePairings(params: GeneratorParams, capacityPerPosition: number, r: Rng, flightNo: () => number, zone: string): Pairing[] {

@@ -1,6 +1,7 @@
 import { z } from "zod";
-import { addDays, localDate, startOfLocalDay, instantMs } from "../../domain/time.ts";
-import { hm, type RuleImpl } from "../rule.ts";
+import { addDays, instantMs, localDate, startOfLocalDay } from "../../domain/time.ts";
+import type { Duty } from "../duty.ts";
+import { hm, type RuleEnv, type RuleImpl, type Violation } from "../rule.ts";
 import { HOUR, cite, itemsOf, longestFree, name, reference } from "./shared.ts";
 
 const params = z
@@ -8,7 +9,7 @@ const params = z
     freeHours: z.number().min(1),
     /** the window before a duty's report, in consecutive hours (14 CFR 117.25(b): 30 h in 168 h) … */
     windowHours: z.number().int().min(1).optional(),
-    /** … or the window of consecutive base-local calendar days ending with the duty's day (121.467(b)(13)) */
+    /** … or every window of consecutive base-local calendar days (121.467(b)(13): 24 h in any 7 days) */
     windowDays: z.number().int().min(1).optional(),
     before: z.enum(["fdp", "any"]).default("any"),
     reference,
@@ -16,29 +17,52 @@ const params = z
   .strict()
   .refine((p) => (p.windowHours === undefined) !== (p.windowDays === undefined), { message: "give windowHours or windowDays" });
 
+type P = z.infer<typeof params>;
+const dateOf = (ms: number, zone: string) => localDate(new Date(ms).toISOString(), zone);
+
+/**
+ * Calendar-day windows are judged once closed: the window ending on day E is
+ * complete when a duty reports after E (no later item can fall in it), or when
+ * the line is finished. Windows ending before the period are history's.
+ */
+function closedWindows(duties: readonly Duty[], p: P, env: RuleEnv, from: string, until: string): Violation[] {
+  const out: Violation[] = [];
+  for (let e = from < env.periodStart ? env.periodStart : from; e <= until && e <= env.periodEnd; e = addDays(e, 1)) {
+    const start = instantMs(startOfLocalDay(addDays(e, -(p.windowDays! - 1)), env.zone));
+    const end = instantMs(startOfLocalDay(addDays(e, 1), env.zone));
+    const inside = duties.filter((d) => d.release > start && d.report < end && d.source.kind !== "look-back");
+    if (!inside.length) continue;
+    const best = longestFree(duties, start, end);
+    if (best >= p.freeHours * 60) continue;
+    out.push({
+      ruleId: "free-period",
+      measured: best,
+      limit: p.freeHours * 60,
+      unit: "minutes",
+      items: itemsOf(...inside),
+      text: `the longest time free from duty in the ${p.windowDays} days ending ${e} is ${hm(best)}; at least ${hm(p.freeHours * 60)} in a row is required${cite(p.reference)}`,
+    });
+  }
+  return out;
+}
+
 /** A stretch free from all duty of at least `freeHours` inside a rolling window. */
-export const freePeriod: RuleImpl<z.infer<typeof params>> = {
+export const freePeriod: RuleImpl<P> = {
   id: "free-period",
   params,
   onDuty({ duties, params: p, env }) {
     const d = duties[duties.length - 1]!;
-    if (d.source.kind === "look-back" || (p.before === "fdp" && !d.flight)) return [];
-    let from: number;
-    let to: number;
-    if (p.windowHours !== undefined) {
-      to = d.report;
-      from = to - p.windowHours * HOUR;
-    } else {
-      const last = localDate(new Date(d.release).toISOString(), env.zone);
-      from = instantMs(startOfLocalDay(addDays(last, -(p.windowDays! - 1)), env.zone));
-      to = Math.max(d.release, instantMs(startOfLocalDay(addDays(last, 1), env.zone)));
+    if (d.source.kind === "look-back") return [];
+    if (p.windowDays !== undefined) {
+      // The windows this duty closes: those ending from the previous duty's report day to the day before its own.
+      const prev = duties[duties.length - 2];
+      const from = prev ? dateOf(prev.report, env.zone) : env.periodStart;
+      return closedWindows(duties.slice(0, -1), p, env, from, addDays(dateOf(d.report, env.zone), -1));
     }
-    // Nothing is known before the look-back starts: treat the window as free only where duties are listed.
-    const free = longestFree(duties, from, p.windowHours !== undefined ? to : d.release);
-    const tail = p.windowHours === undefined ? (to - d.release) / 60_000 : 0;
-    const best = Math.max(free, tail);
+    if (p.before === "fdp" && !d.flight) return [];
+    const to = d.report;
+    const best = longestFree(duties, to - p.windowHours! * HOUR, to);
     if (best >= p.freeHours * 60) return [];
-    const window = p.windowHours !== undefined ? `the ${p.windowHours} hours before ${name(d)}` : `the ${p.windowDays} days ending with ${name(d)}`;
     return [
       {
         ruleId: "free-period",
@@ -46,8 +70,14 @@ export const freePeriod: RuleImpl<z.infer<typeof params>> = {
         limit: p.freeHours * 60,
         unit: "minutes",
         items: itemsOf(d),
-        text: `the longest time free from duty in ${window} is ${hm(best)}; at least ${hm(p.freeHours * 60)} in a row is required${cite(p.reference)}`,
+        text: `the longest time free from duty in the ${p.windowHours} hours before ${name(d)} is ${hm(best)}; at least ${hm(p.freeHours * 60)} in a row is required${cite(p.reference)}`,
       },
     ];
+  },
+  onLine({ allDuties, params: p, env }) {
+    if (p.windowDays === undefined) return [];
+    const last = allDuties[allDuties.length - 1];
+    if (!last) return [];
+    return closedWindows(allDuties, p, env, dateOf(last.report, env.zone), env.periodEnd);
   },
 };

@@ -9,7 +9,7 @@ const ctx = (i: Instance): EngineContext => ({ stations: i.stations, zone: i.per
 /** The rules that judge a duty or a rest, not the whole line (credit window, days off are the line's). */
 const dutyRules = (rs: RuleSet): RuleSet => ({
   ...rs,
-  rules: rs.rules.filter((r) => !REGISTRY.get(String(r.params.check ?? r.id))?.onLine),
+  rules: rs.rules.filter((r) => REGISTRY.get(String(r.params.check ?? r.id))?.onDuty !== undefined),
 });
 /** A crew member with no history, so only the pairing itself is judged. */
 const fresh = (i: Instance) => ({ ...i.crew[0]!, fixedActivities: [], carryIn: [], lookBack: { duties: [], dailyFlightMinutes: [] } });

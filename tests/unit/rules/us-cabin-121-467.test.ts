@@ -61,10 +61,18 @@ describe("14 CFR 121.467 — us-cabin preset", () => {
     it("§121.467(b)(13): 23 h 59 min free fails on the seventh day", () => {
       const v = violations(checkLine(crew(), rule, items(...week("17:59")), ctx));
       expect(v).toHaveLength(1);
-      expect(v[0]).toMatchObject({ ruleId: "free-24-in-7-days", measured: 1439, limit: 1440, items: ["C16"] });
+      expect(v[0]).toMatchObject({ ruleId: "free-24-in-7-days", measured: 1439, limit: 1440, items: ["C10", "C11", "C12", "C13", "C14", "C15", "C16"] });
       expect(v[0]!.text).toBe(
-        "the longest time free from duty in the 7 days ending with trip C16 is 23 h 59 min; at least 24 h in a row is required (14 CFR 121.467(b)(13))",
+        "the longest time free from duty in the 7 days ending 2027-05-16 is 23 h 59 min; at least 24 h in a row is required (14 CFR 121.467(b)(13))",
       );
+    });
+
+    it("§121.467(b)(13): a late duty that fills the rest of its day is not free time (14 days of 14:00–24:00)", () => {
+      // Rests of 14 h every night: no 24 h free in any 7 days, though each day ends with a duty at 24:00.
+      const late = Array.from({ length: 14 }, (_, k) => oneDuty(`N${k}`, at(addDays("2027-05-10", k), "14:00"), 600));
+      const v = violations(checkLine(crew(), rule, items(...late), ctx));
+      expect(v.length).toBeGreaterThan(0);
+      expect(Math.max(...v.map((x) => x.measured))).toBe(14 * 60);
     });
   });
 });
