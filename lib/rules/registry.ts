@@ -3,7 +3,7 @@
  * its `check` parameter when it has one (several rules can share one
  * implementation: three cumulative limits, say), else by its own id.
  */
-import type { Rule } from "../domain/index.ts";
+import type { Rule, RuleSet } from "../domain/index.ts";
 import { AppError } from "../domain/index.ts";
 import { cumulative } from "./checks/cumulative.ts";
 import { daysBetweenTrips } from "./checks/days-between-trips.ts";
@@ -21,6 +21,14 @@ const IMPLEMENTATIONS: readonly RuleImpl<never>[] = [
 ] as unknown as RuleImpl<never>[];
 
 export const REGISTRY: ReadonlyMap<string, RuleImpl<unknown>> = new Map(IMPLEMENTATIONS.map((r) => [r.id, r as RuleImpl<unknown>]));
+
+/**
+ * The rules of a document that judge duties and rests (no line-only rules such
+ * as the credit window or days off): what a single trip can be held to.
+ */
+export function dutyRulesOnly(ruleSet: RuleSet): RuleSet {
+  return { ...ruleSet, rules: ruleSet.rules.filter((r) => REGISTRY.get(String(r.params.check ?? r.id))?.onDuty !== undefined) };
+}
 
 /** A rule of a document, bound to its implementation with parsed parameters. */
 export interface BoundRule {

@@ -6,7 +6,7 @@
  */
 import type { CrewMember, Pairing, RuleSet } from "../../lib/domain/index.ts";
 import { addDays, instantMs, startOfLocalDay } from "../../lib/domain/time.ts";
-import { REGISTRY, checkLine } from "../../lib/rules/index.ts";
+import { checkLine, dutyRulesOnly } from "../../lib/rules/index.ts";
 import { OCEANIC, OCEANIC_QUALIFICATION, STATIONS } from "../carrier.ts";
 import { makePairing } from "../pairing-factory.ts";
 import type { Rng } from "../random.ts";
@@ -31,16 +31,24 @@ function weighted<T>(r: Rng, items: ReadonlyArray<readonly [T, number]>): T {
 
 const clock = (m: number) => `${String(Math.floor(m / 60)).padStart(2, "0")}:${String(m % 60).padStart(2, "0")}`;
 
-/** Minutes of line capacity per position: each crew member's capacity scaled by the share of days not on leave. */
-export function capacityMinutes(crew: readonly CrewMember[], params: GeneratorParams, zone: string): number {
-  const periodStart = instantMs(startOfLocalDay(params.startDate, zone));
-  const periodEnd = instantMs(startOfLocalDay(addDays(params.startDate, params.days), zone));
+/**
+ * Crew available in a period, in whole crew members: each counts the share of
+ * the period (base-local dates `first`..`last`) they are not on leave.
+ */
+export function availableCrew(crew: readonly CrewMember[], first: string, last: string, zone: string): number {
+  const periodStart = instantMs(startOfLocalDay(first, zone));
+  const periodEnd = instantMs(startOfLocalDay(addDays(last, 1), zone));
   return crew.reduce((sum, c) => {
     const away = c.fixedActivities
       .filter((a) => a.kind === "vacation")
       .reduce((t, a) => t + Math.max(0, Math.min(periodEnd, instantMs(a.end)) - Math.max(periodStart, instantMs(a.start))), 0);
-    return sum + params.lineCapacityMinutes * (1 - away / (periodEnd - periodStart));
+    return sum + 1 - away / (periodEnd - periodStart);
   }, 0);
+}
+
+/** Minutes of line capacity: each crew member's capacity scaled by the share of days not on leave. */
+export function capacityMinutes(crew: readonly CrewMember[], params: GeneratorParams, zone: string): number {
+  return params.lineCapacityMinutes * availableCrew(crew, params.startDate, addDays(params.startDate, params.days - 1), zone);
 }
 
 /**
@@ -57,7 +65,7 @@ function legalAlone(p: Pairing, ruleSets: readonly RuleSet[], params: GeneratorP
 /** The duty and rest rules of each distinct preset the positions fly under. */
 function dutyRuleSets(params: GeneratorParams): RuleSet[] {
   const byPreset = new Map(params.positions.map((pos) => [ruleSetFor(pos).preset, ruleSetFor(pos)]));
-  return [...byPreset.values()].map((rs) => ({ ...rs, rules: rs.rules.filter((rule) => REGISTRY.get(String(rule.params.check ?? rule.id))?.onDuty !== undefined) }));
+  return [...byPreset.values()].map(dutyRulesOnly);
 }
 
 export function makePairings(params: GeneratorParams, capacityPerPosition: number, r: Rng, flightNo: () => number, zone: string): Pairing[] {

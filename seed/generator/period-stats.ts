@@ -3,7 +3,8 @@
  * stated ranges and closing notes can quote them.
  */
 import type { Instance } from "../../lib/domain/index.ts";
-import { addDays, instantMs, isRedEye, layoverStations, localDayMinutes, pairingLengthDays, periodDates, startOfLocalDay } from "../../lib/domain/index.ts";
+import { isRedEye, layoverStations, localDayMinutes, pairingLengthDays, periodDates } from "../../lib/domain/index.ts";
+import { availableCrew } from "./make-pairings.ts";
 
 export interface InstanceStats {
   group: string;
@@ -38,14 +39,7 @@ export function instanceStats(instance: Instance, lineCapacityMinutes = 85 * 60)
   for (const p of pairings) lengths[pairingLengthDays(p, zone)] = (lengths[pairingLengthDays(p, zone)] ?? 0) + 1;
   const layovers = new Map<string, number>();
   for (const p of pairings) for (const s of layoverStations(p)) layovers.set(s, (layovers.get(s) ?? 0) + 1);
-  const start = instantMs(startOfLocalDay(period.startDate, zone));
-  const end = instantMs(startOfLocalDay(addDays(period.endDate, 1), zone));
-  const available = crew.reduce((sum, c) => {
-    const away = c.fixedActivities
-      .filter((a) => a.kind === "vacation")
-      .reduce((t, a) => t + Math.max(0, Math.min(end, instantMs(a.end)) - Math.max(start, instantMs(a.start))), 0);
-    return sum + 1 - away / (end - start);
-  }, 0);
+  const available = availableCrew(crew, period.startDate, period.endDate, zone);
   const wishes = Object.values(bids).flat();
   const kinds: Record<string, number> = {};
   for (const w of wishes) kinds[w.kind] = (kinds[w.kind] ?? 0) + 1;

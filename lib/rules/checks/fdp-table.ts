@@ -4,7 +4,7 @@ import { acclimationAt } from "../acclimation.ts";
 import { hm, type RuleImpl } from "../rule.ts";
 import { euTableTwoMinutes } from "../tables/eu-oro-ftl.ts";
 import { usTableBMinutes } from "../tables/us-117.ts";
-import { MINUTE, cite, itemsOf, name, reference } from "./shared.ts";
+import { MINUTE, cite, itemsOf, minuteOfDay, name, reference } from "./shared.ts";
 
 const params = z
   .object({
@@ -15,11 +15,6 @@ const params = z
     reference,
   })
   .strict();
-
-const minuteOfDay = (ms: number, zone: string) => {
-  const [h, m] = localTime(new Date(ms).toISOString(), zone).split(":").map(Number) as [number, number];
-  return h * 60 + m;
-};
 
 /** The flight duty period limit of a published table, by scheduled start (acclimated local time) and segments. */
 export const fdpTable: RuleImpl<z.infer<typeof params>> = {

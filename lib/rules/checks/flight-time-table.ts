@@ -1,9 +1,8 @@
 import { z } from "zod";
-import { localTime } from "../../domain/time.ts";
 import { acclimationAt } from "../acclimation.ts";
 import { hm, type RuleImpl } from "../rule.ts";
 import { usTableAMinutes } from "../tables/us-117.ts";
-import { cite, itemsOf, name, reference } from "./shared.ts";
+import { cite, itemsOf, minuteOfDay, name, reference } from "./shared.ts";
 
 const params = z.object({ table: z.enum(["us-117-table-a"]), reference }).strict();
 
@@ -16,8 +15,7 @@ export const flightTimeTable: RuleImpl<z.infer<typeof params>> = {
     const d = duties[k]!;
     if (!d.flight || d.source.kind === "look-back") return [];
     const zone = acclimationAt(duties, k, env).zone;
-    const [h, m] = localTime(new Date(d.report).toISOString(), zone).split(":").map(Number) as [number, number];
-    const limit = usTableAMinutes(h * 60 + m);
+    const limit = usTableAMinutes(minuteOfDay(d.report, zone));
     if (d.flightMinutes <= limit) return [];
     return [
       {

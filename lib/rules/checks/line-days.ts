@@ -1,5 +1,5 @@
 /** Base-local calendar days a line works, shared by the days-off and days-on rules. */
-import { localDatesTouched, periodDates } from "../../domain/time.ts";
+import { localDatesTouched } from "../../domain/time.ts";
 import type { Duty } from "../duty.ts";
 
 /** The period's dates touched by any duty (report to release, base local). */
@@ -12,5 +12,3 @@ export function workedDates(duties: readonly Duty[], zone: string, start: string
   }
   return worked;
 }
-
-export { periodDates };

@@ -5,8 +5,8 @@
 import { z } from "zod";
 import { hm, type RuleImpl } from "../rule.ts";
 import { cite, reference } from "./shared.ts";
-import { addDays } from "../../domain/time.ts";
-import { periodDates, workedDates } from "./line-days.ts";
+import { addDays, periodDates } from "../../domain/time.ts";
+import { workedDates } from "./line-days.ts";
 
 const creditParams = z.object({ minMinutes: z.number().int().min(0).optional(), maxMinutes: z.number().int().min(0).optional(), reference }).strict();
 

@@ -1,16 +1,13 @@
 import { describe, expect, it } from "vitest";
 import type { Instance, RuleSet } from "@/lib/domain";
-import { REGISTRY, checkLine, type EngineContext, type Violation } from "@/lib/rules";
+import { checkLine, dutyRulesOnly, type EngineContext, type Violation } from "@/lib/rules";
 import { generatePeriod } from "@/seed/generator/generate-period";
 import { greedyLines } from "@/seed/greedy-lines";
 import { loadKasirzadeh } from "@/seed/published/kasirzadeh-2017";
 
 const ctx = (i: Instance): EngineContext => ({ stations: i.stations, zone: i.period.zone, periodStart: i.period.startDate, periodEnd: i.period.endDate });
 /** The rules that judge a duty or a rest, not the whole line (credit window, days off are the line's). */
-const dutyRules = (rs: RuleSet): RuleSet => ({
-  ...rs,
-  rules: rs.rules.filter((r) => REGISTRY.get(String(r.params.check ?? r.id))?.onDuty !== undefined),
-});
+const dutyRules = dutyRulesOnly;
 /** A crew member with no history, so only the pairing itself is judged. */
 const fresh = (i: Instance) => ({ ...i.crew[0]!, fixedActivities: [], carryIn: [], lookBack: { duties: [], dailyFlightMinutes: [] } });
 
