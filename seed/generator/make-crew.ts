@@ -97,7 +97,7 @@ function makeMember(ctx: CrewContext, r: Rng, id: string, seniority: number, pos
 
 /**
  * A year of flying before the period, stopping at `end` (exclusive; a carry-in trip starts there): blocks of 2–4 duty days and 2–5
- * days off, 2.5–7 h of flight time a day. Gives about 600–800 h a year, inside
+ * days off, 2.5–7 h of flight time a day. Gives about 700–900 h a year, inside
  * 14 CFR 117.23(b)'s 1,000 h. The last 28 days' duties are listed one by one.
  */
 function makeHistory(r: Rng, zone: string, periodStart: string, end: string): CrewMember["lookBack"] {

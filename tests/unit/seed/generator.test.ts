@@ -122,6 +122,14 @@ describe("the bid-period generator", { timeout: 60_000 }, () => {
     expect(captains).toBeLessThan(cabin / 2);
   });
 
+  it("puts holidays among the most wished-for free days (December: 24–26 and 31 December)", () => {
+    const december = generatePeriod({ crew: 60, seed: 4, positions: ["captain"], startDate: "2027-12-01" }).instances[0]!;
+    const count = new Map<string, number>();
+    for (const w of Object.values(december.bids).flat()) if (w.kind === "free-days") for (const d of w.dates) count.set(d, (count.get(d) ?? 0) + 1);
+    const top = [...count.entries()].sort((a, b) => b[1] - a[1]).slice(0, 4).map(([d]) => d);
+    expect(top.filter((d) => ["2027-12-24", "2027-12-25", "2027-12-26", "2027-12-31"].includes(d)).length).toBeGreaterThanOrEqual(3);
+  });
+
   it("takes a pairing count instead of a tightness, and a single position gives one instance", () => {
     const small = generatePeriod({ crew: 10, pairings: 40, positions: ["flight_attendant", "purser"], seed: 2 });
     expect(small.instances.map((i) => i.pairings.length)).toEqual([40, 40]);
