@@ -1,6 +1,6 @@
 /**
  * The demo's data, written once into an empty database: a generated month at
- * Halvern for captains and first officers (about 64 crew and 250 trips),
+ * Halvern for captains and first officers (64 crew and about 240 trips),
  * bidding open until the 20th, with the generated bids of the other crew
  * already in and the demo crew accounts' own bids left for the visitor.
  */
