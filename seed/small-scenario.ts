@@ -7,7 +7,7 @@ import type { Bundle, CrewMember, Position } from "../lib/domain/index.ts";
 import { bundleSchema } from "../lib/domain/index.ts";
 import { DEMO_PASSWORD, type UserSeed } from "./demo-users.ts";
 import { ruleSetFor } from "./generator/rule-set-presets.ts";
-import { addDays, atLocalTime, localDate, startOfLocalDay } from "../lib/domain/time.ts";
+import { addDays, atLocalTime, localDate, monthLabel, startOfLocalDay } from "../lib/domain/time.ts";
 import { CARRIER, STATIONS, type StationSeed } from "./carrier.ts";
 import { makePairing, type PairingSeed } from "./pairing-factory.ts";
 import { rng } from "./random.ts";
@@ -70,7 +70,6 @@ export function nextPeriod(now: Date, zone: string): { startDate: string; endDat
   };
 }
 
-const MONTHS = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
 
 export interface SmallScenarioOptions {
   seed?: number;
@@ -135,7 +134,7 @@ export function smallScenario(opts: SmallScenarioOptions = {}): Scenario {
       { email: `planning@${CARRIER.mailDomain}`, name: "Oriel Banks", role: "scheduler", password: DEMO_PASSWORD },
       { email: `admin@${CARRIER.mailDomain}`, name: "Wren Adeyemi", role: "admin", password: DEMO_PASSWORD },
     ],
-    period: { name: `${MONTHS[Number(dates.startDate.slice(5, 7)) - 1]} ${dates.startDate.slice(0, 4)}`, base, zone, ...dates, state: opts.state ?? "open" },
+    period: { name: monthLabel(dates.startDate), base, zone, ...dates, state: opts.state ?? "open" },
     pairings,
   };
 }

@@ -7,11 +7,10 @@
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { randomBytes } from "node:crypto";
 import fs from "node:fs";
-import net from "node:net";
 import path from "node:path";
 import { createPrisma } from "../db/client.ts";
 import { resolveDatabase } from "../db/database.ts";
-import { REPO_ROOT } from "../db/local-server.ts";
+import { REPO_ROOT, isFree } from "../db/local-server.ts";
 import { applyMigrations } from "../db/migrate.ts";
 import { seedDemoIfEmpty } from "../../seed/demo.ts";
 import { needsBuild } from "./build-state.ts";
@@ -137,12 +136,7 @@ function demoSecret(): string {
 
 async function freePort(preferred: number): Promise<number> {
   for (let p = preferred; p < preferred + 20; p++) {
-    const free = await new Promise<boolean>((resolve) => {
-      const srv = net.createServer();
-      srv.once("error", () => resolve(false));
-      srv.listen(p, () => srv.close(() => resolve(true)));
-    });
-    if (free) return p;
+    if (await isFree(p)) return p; // next start listens on every interface
     log(`port ${p} is taken, trying ${p + 1}`);
   }
   throw new Error(`no free port between ${preferred} and ${preferred + 19}; set PORT`);

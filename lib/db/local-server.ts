@@ -232,7 +232,7 @@ function superuserPassword(dataDir: string): string {
 }
 
 async function choosePort(preferred: number): Promise<number> {
-  if (preferred > 0 && (await isFree(preferred))) return preferred;
+  if (preferred > 0 && (await isFree(preferred, "127.0.0.1"))) return preferred;
   return new Promise((resolve, reject) => {
     const srv = net.createServer();
     srv.once("error", reject);
@@ -243,10 +243,11 @@ async function choosePort(preferred: number): Promise<number> {
   });
 }
 
-function isFree(port: number): Promise<boolean> {
+/** Whether nothing listens on `port` (on `host`, or on every interface when it is omitted). */
+export function isFree(port: number, host?: string): Promise<boolean> {
   return new Promise((resolve) => {
     const srv = net.createServer();
     srv.once("error", () => resolve(false));
-    srv.listen(port, "127.0.0.1", () => srv.close(() => resolve(true)));
+    srv.listen(port, host, () => srv.close(() => resolve(true)));
   });
 }

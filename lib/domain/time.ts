@@ -171,3 +171,10 @@ export function localDateTimeLabel(instant: string, zone: string): string {
     timeZoneName: "short",
   });
 }
+
+const MONTH_NAMES = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
+
+/** The month of a date as people name it, e.g. "2027-03-14" → "March 2027". */
+export function monthLabel(date: string): string {
+  return `${MONTH_NAMES[Number(date.slice(5, 7)) - 1]} ${date.slice(0, 4)}`;
+}

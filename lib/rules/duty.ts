@@ -57,10 +57,10 @@ function dutyOf(d: DutyPeriod, source: DutySource): Duty {
 }
 
 /** The duties of a pairing (computed once per pairing object: parsed pairings are not changed). */
-export function pairingDuties(p: Pairing, kind: "pairing" | "carry-in" = "pairing"): Duty[] {
+export function pairingDuties(p: Pairing): Duty[] {
   let known = cache.get(p);
   if (!known) {
-    known = p.dutyPeriods.map((d, index) => dutyOf(d, { kind, id: p.id, index }));
+    known = p.dutyPeriods.map((d, index) => dutyOf(d, { kind: "pairing", id: p.id, index }));
     cache.set(p, known);
   }
   return known;

@@ -26,7 +26,6 @@ export interface LineState {
   duties: Duty[];
   pairings: Pairing[];
   dailyFlight: Map<string, number>;
-  historyCount: number;
   /** the crew member's training and office duty in the period, not yet merged in (time order) */
   pending: Duty[];
   /** leave, medical and other time off: nothing may overlap it, but it is not duty */
@@ -81,7 +80,6 @@ export function start(crew: CrewMember, ruleSet: RuleSet, ctx: EngineContext): L
     duties: [],
     pairings: [],
     dailyFlight: new Map(crew.lookBack.dailyFlightMinutes.map((d) => [d.date, d.minutes])),
-    historyCount: 0,
     pending,
     off,
   };
@@ -89,7 +87,7 @@ export function start(crew: CrewMember, ruleSet: RuleSet, ctx: EngineContext): L
   // own duties are judged against it, carry-in included.
   let s = state;
   for (const d of history) s = push(s, d, false).state;
-  return { ...s, historyCount: s.duties.length };
+  return s;
 }
 
 function push(state: LineState, d: Duty, check: boolean): { state: LineState; violations: Violation[] } {

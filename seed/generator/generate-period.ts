@@ -4,7 +4,7 @@
  * needs besides (the bidding window and demo sign-ins are added by callers).
  */
 import { awardSettingsSchema, bundleSchema, instanceSchema, type Bundle, type Instance } from "../../lib/domain/index.ts";
-import { addDays } from "../../lib/domain/time.ts";
+import { addDays, monthLabel } from "../../lib/domain/time.ts";
 import { CARRIER, STATIONS } from "../carrier.ts";
 import { rng } from "../random.ts";
 import { makeBids, tripAppeal } from "./make-bids.ts";
@@ -13,7 +13,6 @@ import { capacityMinutes, makePairings } from "./make-pairings.ts";
 import { CREW_PER_PAIRING, generatorParamsSchema, type GeneratorInput } from "./params.ts";
 import { ruleSetFor } from "./rule-set-presets.ts";
 
-const MONTHS = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
 
 export function generatePeriod(input: GeneratorInput = {}): Bundle {
   const params = generatorParamsSchema.parse(input);
@@ -34,10 +33,9 @@ export function generatePeriod(input: GeneratorInput = {}): Bundle {
   const appeal = new Map(pairings.map((p) => [p.id, tripAppeal(p, zone)]));
   const ranked = [...pairings].sort((a, b) => appeal.get(b.id)! - appeal.get(a.id)! || a.id.localeCompare(b.id));
   const bids = makeBids(crew, { params, zone, endDate, ranked }, rng(params.seed * 7919 + 4));
-  const [y, m] = params.startDate.split("-").map(Number) as [number, number];
   const period = {
     id: params.periodId ?? `${params.base}-${params.startDate.slice(0, 7)}`,
-    name: params.days >= 28 && params.startDate.endsWith("-01") ? `${MONTHS[m - 1]} ${y}` : `${params.startDate} to ${endDate}`,
+    name: params.days >= 28 && params.startDate.endsWith("-01") ? monthLabel(params.startDate) : `${params.startDate} to ${endDate}`,
     startDate: params.startDate,
     endDate,
     zone,

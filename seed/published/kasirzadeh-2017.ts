@@ -22,7 +22,7 @@ import {
   type Instance,
   type Pairing,
 } from "../../lib/domain/index.ts";
-import { localDate } from "../../lib/domain/time.ts";
+import { localDate, monthLabel } from "../../lib/domain/time.ts";
 import { rng } from "../random.ts";
 import { seededBids, type MakeBids } from "./kasirzadeh-2017-bids.ts";
 import { inputError, parseDayFile, parseListOfBases, parseSolution, type RawLeg } from "./kasirzadeh-2017-files.ts";
@@ -68,7 +68,6 @@ export interface KasirzadehData {
 }
 
 const DAY_FILE = /^day_(\d+)\.csv$/;
-const MONTHS = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
 
 /** FNV-1a of the seed and the base's code, so each base draws its own stream of the same seed. */
 function baseSeed(seed: number, code: string): number {
@@ -107,9 +106,8 @@ function periodDates(legs: Iterable<RawLeg>, pairings: readonly Pairing[]): { st
 }
 
 function periodName(startDate: string, endDate: string, baseName: string): string {
-  const [year, month] = startDate.split("-");
   const oneMonth = endDate.slice(0, 7) === startDate.slice(0, 7);
-  return `${oneMonth ? `${MONTHS[Number(month) - 1]} ${year}` : `${startDate} to ${endDate}`}, ${baseName}`;
+  return `${oneMonth ? monthLabel(startDate) : `${startDate} to ${endDate}`}, ${baseName}`;
 }
 
 function crewOf(code: string, baseName: string, pilots: number): CrewMember[] {
