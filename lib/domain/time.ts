@@ -12,10 +12,44 @@ const DAY_MS = 86_400_000;
 const DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
 const CLOCK = /^([01]\d|2[0-3]):([0-5]\d)$/;
 
-function zoneOf(zone: string): IANAZone {
-  const found = IANAZone.create(zone);
-  if (!found.isValid) throw new RangeError(`"${zone}" is not a known IANA time zone`);
+const HOUR_MS = 3_600_000;
+
+/**
+ * A zone's UTC offset in minutes at epoch ms, memoised per whole UTC hour: an
+ * hour whose start and end have the same offset holds no change (tzdata has
+ * no zone that changes twice within an hour), so every instant in it shares
+ * that offset; in an hour that does hold a change, each instant asks the zone.
+ * Asking Intl for every instant made a line check take about a millisecond.
+ */
+interface CachedZone {
+  zone: IANAZone;
+  hours: Map<number, number>;
+}
+
+const zones = new Map<string, CachedZone>();
+const CHANGES = Number.NaN;
+
+function zoneOf(zone: string): CachedZone {
+  let found = zones.get(zone);
+  if (!found) {
+    const tz = IANAZone.create(zone);
+    if (!tz.isValid) throw new RangeError(`"${zone}" is not a known IANA time zone`);
+    found = { zone: tz, hours: new Map() };
+    zones.set(zone, found);
+  }
   return found;
+}
+
+function offsetAt(cached: CachedZone, ms: number): number {
+  const hour = Math.floor(ms / HOUR_MS);
+  let offset = cached.hours.get(hour);
+  if (offset === undefined) {
+    const first = cached.zone.offset(hour * HOUR_MS);
+    offset = first === cached.zone.offset((hour + 1) * HOUR_MS) ? first : CHANGES;
+    if (cached.hours.size > 200_000) cached.hours.clear();
+    cached.hours.set(hour, offset);
+  }
+  return Number.isNaN(offset) ? cached.zone.offset(ms) : offset;
 }
 
 const pad = (n: number, width = 2) => String(n).padStart(width, "0");
@@ -36,7 +70,7 @@ function formatCivil(ms: number): string {
 /** The wall clock of `instant` in `zone`, as if it were UTC. */
 function wallMs(instant: string, zone: string): number {
   const ms = instantMs(instant);
-  return ms + zoneOf(zone).offset(ms) * MINUTE_MS;
+  return ms + offsetAt(zoneOf(zone), ms) * MINUTE_MS;
 }
 
 /** Whether `zone` is an IANA zone name the runtime knows. */
@@ -101,11 +135,11 @@ export function atLocalTime(date: string, time: string, zone: string): string {
   const wall = civilMs(date) + (Number(clock[1]) * 60 + Number(clock[2])) * MINUTE_MS;
   const tz = zoneOf(zone);
   // Offsets a day either side cover the one change a local day can hold.
-  const before = tz.offset(wall - DAY_MS);
-  const after = tz.offset(wall + DAY_MS);
+  const before = offsetAt(tz, wall - DAY_MS);
+  const after = offsetAt(tz, wall + DAY_MS);
   const fits = [before, after]
     .map((offset) => wall - offset * MINUTE_MS)
-    .filter((candidate) => wall - tz.offset(candidate) * MINUTE_MS === candidate);
+    .filter((candidate) => wall - offsetAt(tz, candidate) * MINUTE_MS === candidate);
   const instant = fits.length > 0 ? Math.min(...fits) : wall - before * MINUTE_MS;
   return toInstant(new Date(instant));
 }

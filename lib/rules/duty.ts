@@ -5,7 +5,7 @@
  * shape.
  */
 import type { CrewMember, DutyPeriod, FixedActivity, Pairing } from "../domain/index.ts";
-import { instantMs } from "../domain/time.ts";
+import { instantMs, localDate, localDatesTouched } from "../domain/time.ts";
 
 /** Where a duty came from, for violation messages. */
 export interface DutySource {
@@ -100,4 +100,23 @@ export function describeSource(s: DutySource): string {
   if (s.kind === "carry-in") return `carry-in trip ${s.id}`;
   if (s.kind === "look-back") return "a duty before the period";
   return s.id;
+}
+
+const dutyDateMemo = new WeakMap<Duty, Map<string, { report: string; touched: readonly string[] }>>();
+
+/**
+ * A duty's base-local report date and the dates it touches (report to
+ * release), memoised per duty object and zone: rules ask the same duties
+ * again for every line a search tries.
+ */
+export function dutyDates(d: Duty, zone: string): { report: string; touched: readonly string[] } {
+  let byZone = dutyDateMemo.get(d);
+  if (!byZone) dutyDateMemo.set(d, (byZone = new Map()));
+  let known = byZone.get(zone);
+  if (!known) {
+    const report = new Date(d.report).toISOString();
+    known = { report: localDate(report, zone), touched: Object.freeze(localDatesTouched(report, new Date(d.release).toISOString(), zone)) };
+    byZone.set(zone, known);
+  }
+  return known;
 }

@@ -1,5 +1,6 @@
 import { z } from "zod";
-import { addDays, localDate } from "../../domain/time.ts";
+import { addDays } from "../../domain/time.ts";
+import { dutyDates } from "../duty.ts";
 import { hm, type RuleImpl } from "../rule.ts";
 import { HOUR, MINUTE, cite, itemsOf, name, overlapMinutes, reference } from "./shared.ts";
 
@@ -46,12 +47,12 @@ export const cumulative: RuleImpl<z.infer<typeof params>> = {
       window = `${p.windowHours} consecutive hours`;
     } else {
       // Calendar days: flight time by the base-local date of each duty's report.
-      const last = localDate(new Date(d.report).toISOString(), env.zone);
+      const last = dutyDates(d, env.zone).report;
       const first = p.calendarYear ? `${last.slice(0, 4)}-01-01` : addDays(last, -(p.windowDays! - 1));
       for (const [date, minutes] of dailyFlight) if (date >= first && date <= last) total += minutes;
       for (const x of duties) {
         if (x.source.kind === "look-back") continue; // already in the daily totals
-        const date = localDate(new Date(x.report).toISOString(), env.zone);
+        const date = dutyDates(x, env.zone).report;
         if (date >= first && date <= last) total += p.measure === "flight" ? x.flightMinutes : (x.release - x.report) / MINUTE;
       }
       window = p.calendarYear ? `calendar year ${last.slice(0, 4)}` : `${p.windowDays} consecutive days`;
