@@ -1,0 +1,61 @@
+/**
+ * The greedy award, a baseline with no lookahead: in seniority order, each
+ * crew member takes the best-scoring legal line among the trips still open
+ * (ties go to the line with more credit, then the earlier trips); a crew
+ * member with no legal line holds reserve, and so do the most junior when the
+ * settings ask for a reserve minimum. Also the engine's first integer solution.
+ */
+import type { Instance } from "../domain/index.ts";
+import { assembleAward, type Choice } from "./assemble.ts";
+import { prepareProblem, type AwardProblem } from "./problem.ts";
+import { bestScores, priceLines } from "./pricing.ts";
+import type { AwardResult } from "./solve.ts";
+
+/** A tie-break per credit minute, far below the smallest wish weight that matters (0.8^49 ≈ 2e-5). */
+const CREDIT_TIE = 1e-9;
+
+export function greedyChoices(problem: AwardProblem, nodeLimit: number): (Choice & { score: number })[] {
+  const left = [...problem.need];
+  const cost = Float64Array.from(problem.pairings, (p) => -CREDIT_TIE * p.creditMinutes);
+  const reserveFrom = problem.crew.length - problem.instance.settings.reserve.min;
+  return problem.crew.map((c, i) => {
+    if (i >= reserveFrom) return { reserve: true, pairings: [], score: 0 };
+    const r = priceLines(problem, c, { scoreWeight: 1, cost, threshold: -Infinity, maxLines: 1, nodeLimit, allowed: (k) => left[k]! > 0 });
+    const line = r.lines[0];
+    if (!line) return { reserve: true, pairings: [], score: 0 };
+    for (const k of line.pairings) left[k]!--;
+    return { reserve: false, pairings: line.pairings, score: line.score };
+  });
+}
+
+/** The greedy award in the engine's result format (no LP: bound and gap are absent). */
+export function greedyAward(instance: Instance, options: { nodeLimit?: number } = {}): AwardResult {
+  const t0 = performance.now();
+  const nodeLimit = options.nodeLimit ?? 20_000;
+  const problem = prepareProblem(instance);
+  const t1 = performance.now();
+  const { best } = bestScores(problem, nodeLimit * 5);
+  const t2 = performance.now();
+  const choices = greedyChoices(problem, nodeLimit);
+  const assembled = assembleAward(problem, choices, best);
+  const t3 = performance.now();
+  return {
+    award: assembled.award,
+    stats: { times: { prepare: t1 - t0, "best-lines": t2 - t1, greedy: t3 - t2 }, columns: 0, rounds: 0, objective: assembled.weightedSatisfaction },
+    report: {
+      method: "greedy",
+      openCreditMinutes: assembled.openCreditMinutes,
+      openPositions: assembled.openPositions,
+      coverageLpBound: 0,
+      objective: assembled.weightedSatisfaction,
+      lpBound: Number.NaN,
+      gap: Number.NaN,
+      provenOptimal: false,
+      illegalPairings: problem.illegal,
+      fairnessShortfalls: [],
+      best: Object.fromEntries(problem.crew.map((c, i) => [c.crew.id, best[i]!])),
+      weights: Object.fromEntries(problem.crew.map((c) => [c.crew.id, c.weight])),
+      warnings: [],
+    },
+  };
+}

@@ -1,0 +1,261 @@
+/**
+ * The master problem in a persistent HiGHS model (maximisation throughout):
+ *
+ *     Σ_ℓ λ_iℓ = 1                        crew row i (one line each; a reserve line is a column too)
+ *     Σ_iℓ a_pℓ λ_iℓ + u_p = d_p           cover row p (u_p open positions, 0 ≤ u_p ≤ d_p)
+ *     min ≤ Σ_i λ_i,reserve ≤ max          reserve row, when the settings bound it
+ *     Σ_p c_p u_p ≤ U*                     coverage row (phase 2)
+ *     Σ_ℓ σ_iℓ λ_iℓ + f_i ≥ φ              fairness row i (phase 2 with a floor; f_i ≥ 0 penalised)
+ *
+ * Columns are appended as they are generated; rows keep their order, so the
+ * duals of one solve price the next round. HiGHS reports, for a maximisation,
+ * the reduced profit of a column as c − Σ_r y_r a_r with y the row duals.
+ */
+import highsLoader, { type Highs, type Model } from "highs";
+import { AppError } from "../domain/index.ts";
+
+let loading: Promise<Highs> | undefined;
+
+/** The HiGHS runtime of this thread (one per worker thread: WebAssembly memory never shrinks). */
+export function loadHighs(): Promise<Highs> {
+  loading ??= highsLoader();
+  return loading;
+}
+
+export interface MasterColumn {
+  crew: number;
+  /** pairing indices; empty for a reserve line and for an empty line-holder line */
+  pairings: number[];
+  reserve: boolean;
+  score: number;
+}
+
+export interface SolveOutcome {
+  status: "optimal" | "time-limit" | "interrupted" | "infeasible" | "other";
+  objective: number;
+  /** the MIP's dual bound (MIP solves) */
+  bound?: number;
+}
+
+export class Master {
+  readonly columns: MasterColumn[] = [];
+  private readonly keys = new Set<string>();
+  /** column index in the model of each master column */
+  private readonly colIndex: number[] = [];
+  private readonly model: Model;
+  private numRows: number;
+  private numCols = 0;
+  private lastX: Float64Array = new Float64Array(0);
+  readonly crewRow: number[];
+  readonly coverRow = new Map<number, number>();
+  readonly openCol = new Map<number, number>();
+  reserveRow = -1;
+  coverageRow = -1;
+  readonly fairRow: number[] = [];
+  readonly fairCol: number[] = [];
+
+  constructor(
+    private readonly highs: Highs,
+    crewCount: number,
+    /** pairing index → crew needed (only pairings someone may fly) */
+    private readonly need: ReadonlyMap<number, number>,
+    reserve: { min: number; max: number },
+  ) {
+    this.model = highs.createModel();
+    this.model.options.set({ output_flag: false, random_seed: 0 });
+    const rowLower: number[] = [];
+    const rowUpper: number[] = [];
+    this.crewRow = Array.from({ length: crewCount }, (_, i) => {
+      rowLower.push(1);
+      rowUpper.push(1);
+      return i;
+    });
+    for (const [p, d] of need) {
+      this.coverRow.set(p, rowLower.length);
+      rowLower.push(d);
+      rowUpper.push(d);
+    }
+    if (reserve.min > 0 || reserve.max < crewCount) {
+      this.reserveRow = rowLower.length;
+      rowLower.push(reserve.min);
+      rowUpper.push(reserve.max);
+    }
+    this.numRows = rowLower.length;
+    this.model.passModel({
+      numCols: 0,
+      numRows: this.numRows,
+      sense: highs.constants.objectiveSense.maximize,
+      colCost: [],
+      colLower: [],
+      colUpper: [],
+      rowLower,
+      rowUpper,
+      matrix: { format: "csc", numRows: this.numRows, numCols: 0, starts: [0], indices: [], values: [] },
+    });
+    for (const [p, d] of need) {
+      this.openCol.set(p, this.numCols);
+      this.addRawCol(0, 0, d, [this.coverRow.get(p)!], [1]);
+    }
+  }
+
+  private addRawCol(cost: number, lower: number, upper: number, indices: number[], values: number[]): number {
+    this.model.addCol(cost, lower, upper, { indices, values });
+    return this.numCols++;
+  }
+
+  private addRawRow(lower: number, upper: number, indices: number[], values: number[]): number {
+    this.model.addRow(lower, upper, { indices, values });
+    return this.numRows++;
+  }
+
+  static key(column: Pick<MasterColumn, "crew" | "pairings" | "reserve">): string {
+    return `${column.crew}:${column.reserve ? "R" : column.pairings.join(",")}`;
+  }
+
+  has(column: Pick<MasterColumn, "crew" | "pairings" | "reserve">): boolean {
+    return this.keys.has(Master.key(column));
+  }
+
+  /** Adds a column with objective coefficient `cost` (and `fairness`, its coefficient in the crew's fairness row). */
+  add(column: MasterColumn, cost: number, fairness = 0): boolean {
+    const key = Master.key(column);
+    if (this.keys.has(key)) return false;
+    this.keys.add(key);
+    const indices = [this.crewRow[column.crew]!];
+    const values = [1];
+    for (const p of column.pairings) {
+      indices.push(this.coverRow.get(p)!);
+      values.push(1);
+    }
+    if (column.reserve && this.reserveRow >= 0) {
+      indices.push(this.reserveRow);
+      values.push(1);
+    }
+    const fair = this.fairRow[column.crew];
+    if (fair !== undefined && fairness !== 0) {
+      indices.push(fair);
+      values.push(fairness);
+    }
+    this.colIndex.push(this.addRawCol(cost, 0, 1, indices, values));
+    this.columns.push(column);
+    return true;
+  }
+
+  /** Phase 1's objective: maximise −Σ c_p u_p, every line worth 0. */
+  setCoverageObjective(openCost: ReadonlyMap<number, number>): void {
+    for (const [p, col] of this.openCol) this.model.changeColCost(col, -(openCost.get(p) ?? 0));
+  }
+
+  /**
+   * Phase 2: keep Σ c_p u_p ≤ limit, set each column's objective coefficient
+   * (`cost(column)`), and with a floor add the elastic fairness rows.
+   */
+  setWishObjective(
+    openCost: ReadonlyMap<number, number>,
+    limit: number,
+    cost: (column: MasterColumn) => number,
+    fairness?: { floor: number; penalty: number; coefficient: (column: MasterColumn) => number; crewCount: number },
+  ): void {
+    const indices: number[] = [];
+    const values: number[] = [];
+    for (const [p, col] of this.openCol) {
+      this.model.changeColCost(col, 0);
+      indices.push(col);
+      values.push(openCost.get(p) ?? 0);
+    }
+    this.coverageRow = this.addRawRow(-Infinity, limit, [], []);
+    indices.forEach((col, k) => this.model.changeCoefficient(this.coverageRow, col, values[k]!));
+    if (fairness) {
+      for (let i = 0; i < fairness.crewCount; i++) {
+        this.fairRow[i] = this.addRawRow(fairness.floor, Infinity, [], []);
+        this.fairCol[i] = this.addRawCol(-fairness.penalty, 0, Infinity, [this.fairRow[i]!], [1]);
+      }
+    }
+    this.columns.forEach((column, k) => {
+      this.model.changeColCost(this.colIndex[k]!, cost(column));
+      const fair = this.fairRow[column.crew];
+      if (fairness && fair !== undefined) {
+        const a = fairness.coefficient(column);
+        if (a !== 0) this.model.changeCoefficient(fair, this.colIndex[k]!, a);
+      }
+    });
+  }
+
+  private run(timeLimit: number, stop: () => boolean): SolveOutcome {
+    this.model.options.set({ time_limit: Math.max(0.01, timeLimit) });
+    const interrupt = (event: { interrupt(): void }) => {
+      if (stop()) event.interrupt();
+      return undefined;
+    };
+    const result = this.model.run({ 1: interrupt, 2: interrupt, 6: interrupt });
+    this.lastX = this.model.getSolution().colValue;
+    const codes = this.highs.constants.modelStatus;
+    const status =
+      result.modelStatus === codes.optimal ? "optimal"
+      : result.modelStatus === codes.timeLimit ? "time-limit"
+      : result.modelStatus === codes.interrupted ? "interrupted"
+      : result.modelStatus === codes.infeasible ? "infeasible"
+      : "other";
+    return { status, objective: this.model.getObjectiveValue() };
+  }
+
+  /** Solves the LP relaxation; duals follow from `duals()`. */
+  solveLp(timeLimit: number, stop: () => boolean): SolveOutcome {
+    this.model.clearIntegrality();
+    const outcome = this.run(timeLimit, stop);
+    if (outcome.status === "infeasible" || outcome.status === "other") {
+      throw new AppError("internal", `the master LP could not be solved (${outcome.status})`);
+    }
+    return outcome;
+  }
+
+  /** Row duals of the last LP solve. */
+  duals(): Float64Array {
+    return this.model.getSolution().rowDual;
+  }
+
+  /** Values of the master columns in the last solve. */
+  values(): number[] {
+    const x = this.lastX;
+    return this.colIndex.map((c) => x[c]!);
+  }
+
+  /** Values of the open-time columns by pairing, and of the fairness slacks by crew. */
+  slacks(): { open: Map<number, number>; fairness: number[] } {
+    const x = this.lastX;
+    return {
+      open: new Map([...this.openCol].map(([p, c]) => [p, x[c]!])),
+      fairness: this.fairCol.map((c) => x[c]!),
+    };
+  }
+
+  /** Solves with the line columns binary (price-and-branch on the columns so far). */
+  solveMip(timeLimit: number, stop: () => boolean, gapTolerance: number, start?: readonly MasterColumn[]): SolveOutcome {
+    this.model.changeColsIntegrality({ kind: "set", indices: this.colIndex }, this.colIndex.map(() => 1 as const));
+    if (start) {
+      // A known integer solution (one column per crew member) as the MIP's first incumbent.
+      const chosen = new Set(start.map((c) => Master.key(c)));
+      const x = new Float64Array(this.numCols);
+      const open = new Map(this.need);
+      this.columns.forEach((c, k) => {
+        if (!chosen.has(Master.key(c))) return;
+        x[this.colIndex[k]!] = 1;
+        for (const p of c.pairings) open.set(p, (open.get(p) ?? 0) - 1);
+      });
+      for (const [p, col] of this.openCol) x[col] = Math.max(0, open.get(p) ?? 0);
+      this.model.setSolution({ colValue: x });
+    }
+    this.model.options.set({ mip_rel_gap: gapTolerance, mip_abs_gap: 1e-9 });
+    const outcome = this.run(timeLimit, stop);
+    const bound = Number(this.model.info.get("mip_dual_bound"));
+    this.model.clearIntegrality();
+    if (outcome.status === "infeasible" || outcome.status === "other") {
+      throw new AppError("internal", `the master MIP could not be solved (${outcome.status})`);
+    }
+    return { ...outcome, bound };
+  }
+
+  dispose(): void {
+    this.model.dispose();
+  }
+}

@@ -1,0 +1,360 @@
+/**
+ * Line generation for one crew member: the legal lines of highest value
+ *
+ *     value(ℓ) = scoreWeight · lineScore(ℓ) − Σ_{p ∈ ℓ} cost_p
+ *
+ * by depth-first branch and bound over the crew member's network (eligible
+ * pairings in report order, arcs where lib/rules says one may follow the
+ * other). Column generation calls it with the master's duals as costs; the
+ * greedy baseline and the best-line computation call it with costs of zero.
+ *
+ * Exactness. The search prunes only on conditions that are necessary for
+ * legality and cannot be mended by adding later trips (the pairwise rules of
+ * the network, the credit maximum, the most days a line may work) and on a
+ * bound no extension can beat. Every line it returns passes the full legality
+ * engine: engine states along the current path are built lazily, only when a
+ * line would be returned, and a duty or rest violation found there closes
+ * the whole subtree (later trips cannot mend an earlier violation). When the
+ * search finishes within its node limit, `exhausted` is true and the best
+ * value found is the true maximum; otherwise `upperBound` is a valid bound.
+ *
+ * The bound of a node: its Σ −cost so far, plus what the trips ahead can add —
+ * the least of the best Σ −cost of any chain of the network after its last
+ * trip (computed backwards once), the credit still allowed times the best
+ * −cost per credit minute ahead, and the days still allowed times the best
+ * −cost per day ahead (both fractional knapsack bounds) — plus
+ * scoreWeight × an optimistic score (wish by wish: what the trips still
+ * ahead could at most make of it; see wishBound).
+ */
+import type { Pairing, Wish } from "../domain/index.ts";
+import { matchesTripSelection, periodWeekends, rankWeight } from "../domain/index.ts";
+import { daysBetween } from "../domain/time.ts";
+import { extendAll, finish, type LineState } from "../rules/index.ts";
+import { start } from "../rules/index.ts";
+import { scoreLine, type AwardProblem, type CrewProblem } from "./problem.ts";
+
+export interface PriceRequest {
+  /** weight of the line's score in its value (0: legality and costs only) */
+  scoreWeight: number;
+  /** cost of each pairing (by pairing index) */
+  cost: ArrayLike<number>;
+  /** only lines of value above this are returned */
+  threshold: number;
+  /** how many lines to return at most (the best ones) */
+  maxLines: number;
+  /** search nodes before giving up on exhausting the search */
+  nodeLimit: number;
+  /** pairings that may be used (by pairing index); all eligible ones when absent */
+  allowed?: (pairing: number) => boolean;
+}
+
+export interface PricedLine {
+  /** pairing indices, by report time */
+  pairings: number[];
+  score: number;
+  value: number;
+}
+
+export interface PriceResult {
+  /** best first; every one legal and of value above the threshold */
+  lines: PricedLine[];
+  /** no legal line has a value above this */
+  upperBound: number;
+  exhausted: boolean;
+  nodes: number;
+}
+
+interface WishPlan {
+  weight: number;
+  wish: Wish;
+  /** trip wishes: matchesAfter[j] = selected trips among eligible positions ≥ j */
+  matchesAfter?: Int32Array;
+  /** trip and no-trip wishes: whether eligible position j is selected */
+  selects?: Uint8Array;
+  /** free-days wishes: the named dates inside the period, as day indices; and how many dates are named */
+  days?: number[];
+  named?: number;
+  /** rhythm wishes: the period's weekends as day indices */
+  weekends?: number[][];
+}
+
+const plans = new WeakMap<CrewProblem, WishPlan[]>();
+
+function wishPlans(problem: AwardProblem, c: CrewProblem): WishPlan[] {
+  let known = plans.get(c);
+  if (known) return known;
+  const { rankDecay } = problem.instance.settings;
+  const { zone, periodStart, periodEnd } = problem.score;
+  const dayIndex = (date: string) => daysBetween(periodStart, date);
+  const inPeriod = (d: number) => d >= 0 && d < problem.periodLength;
+  known = c.wishes.map((wish, rank): WishPlan => {
+    const weight = rankWeight(rank, rankDecay);
+    switch (wish.kind) {
+      case "trip":
+      case "no-trip": {
+        const selects = Uint8Array.from(c.eligible, (k) => (matchesTripSelection(wish, problem.pairings[k]!, zone) ? 1 : 0));
+        const matchesAfter = new Int32Array(c.eligible.length + 1);
+        for (let j = c.eligible.length - 1; j >= 0; j--) matchesAfter[j] = matchesAfter[j + 1]! + selects[j]!;
+        return { weight, wish, selects, matchesAfter };
+      }
+      case "free-days":
+        return { weight, wish, days: wish.dates.map(dayIndex).filter(inPeriod), named: wish.dates.length };
+      case "rhythm":
+        return { weight, wish, weekends: periodWeekends(periodStart, periodEnd).map((w) => w.map(dayIndex)) };
+      default:
+        return { weight, wish };
+    }
+  });
+  plans.set(c, known);
+  return known;
+}
+
+/** The longest run of worked days (dayCount > 0) in the period. */
+function longestRun(dayCount: ArrayLike<number>): number {
+  let run = 0;
+  let longest = 0;
+  for (let d = 0; d < dayCount.length; d++) {
+    run = dayCount[d]! > 0 ? run + 1 : 0;
+    if (run > longest) longest = run;
+  }
+  return longest;
+}
+
+/**
+ * Upper bounds on the score of any line that extends the current one — `path`
+ * (eligible positions), working the period days `dayCount` marks, with
+ * `credit` — with trips at positions ≥ `from` (`ahead`), and of the current
+ * line itself (`here`). Wish by wish, a part cannot grow past: trip — what is
+ * held plus every selected trip still ahead; no-trip — 0 once one is held;
+ * free days — the share of named dates not yet worked inside the period; rhythm
+ * — its score on the period days worked so far (runs only lengthen and weekends
+ * only fill); a credit maximum already exceeded — its present score; a credit
+ * minimum — 1; buddy — 0 without a mutual buddy line. Dates outside the period
+ * are taken as free, which can only raise the bound. The exact score is always
+ * lineScore's; a property test checks these bounds against it.
+ */
+export function wishBounds(
+  problem: AwardProblem,
+  c: CrewProblem,
+  path: readonly number[],
+  dayCount: ArrayLike<number>,
+  credit: number,
+  from: number,
+): { ahead: number; here: number } {
+  let ahead = problem.instance.settings.baseLineValue;
+  let here = ahead;
+  let longest = -1;
+  for (const plan of wishPlans(problem, c)) {
+    const { wish } = plan;
+    let part: number;
+    let partHere: number | undefined;
+    switch (wish.kind) {
+      case "trip": {
+        let held = 0;
+        for (const j of path) held += plan.selects![j]!;
+        part = Math.min(1, (held + plan.matchesAfter![from]!) / wish.count);
+        partHere = Math.min(1, held / wish.count);
+        break;
+      }
+      case "no-trip":
+        part = path.some((j) => plan.selects![j] === 1) ? 0 : 1;
+        break;
+      case "free-days": {
+        let worked = 0;
+        for (const d of plan.days!) if (dayCount[d]! > 0) worked++;
+        part = (plan.named! - worked) / plan.named!;
+        break;
+      }
+      case "rhythm": {
+        const parts: number[] = [];
+        if (wish.maxDaysOn !== undefined) {
+          if (longest < 0) longest = longestRun(dayCount);
+          parts.push(longest <= wish.maxDaysOn ? 1 : wish.maxDaysOn / longest);
+        }
+        if (wish.weekendsOff === true) {
+          const weekends = plan.weekends!;
+          const free = weekends.filter((w) => w.every((d) => !(dayCount[d]! > 0))).length;
+          parts.push(weekends.length === 0 ? 1 : free / weekends.length);
+        }
+        part = parts.length === 0 ? 1 : parts.reduce((t, x) => t + x, 0) / parts.length;
+        break;
+      }
+      case "credit":
+        part = wish.maxMinutes !== undefined && credit > wish.maxMinutes ? wish.maxMinutes / credit : 1;
+        break;
+      case "buddy":
+        part = problem.score.buddyLine ? 1 : 0;
+        break;
+    }
+    ahead += plan.weight * part;
+    here += plan.weight * (partHere ?? part);
+  }
+  return { ahead, here };
+}
+
+const alones = new WeakMap<CrewProblem, Float64Array>();
+
+/** For each eligible position: the score of the line holding that trip alone, less the empty line's. */
+function scoreAlone(problem: AwardProblem, c: CrewProblem): Float64Array {
+  let known = alones.get(c);
+  if (!known) {
+    const empty = scoreLine(problem, c, []);
+    known = Float64Array.from(c.eligible, (k) => scoreLine(problem, c, [k]) - empty);
+    alones.set(c, known);
+  }
+  return known;
+}
+
+/** The best legal lines of one crew member under `request`. */
+export function priceLines(problem: AwardProblem, c: CrewProblem, request: PriceRequest): PriceResult {
+  const { eligible, successors } = c;
+  const m = eligible.length;
+  const allowed = request.allowed;
+  const usable = Uint8Array.from(eligible, (k) => (allowed && !allowed(k) ? 0 : 1));
+  const gain = Float64Array.from(eligible, (k) => -request.cost[k]!);
+  // after[j]: the best Σ gain of a chain that follows position j (0: stop there).
+  const after = new Float64Array(m);
+  for (let j = m - 1; j >= 0; j--) {
+    let best = 0;
+    for (const s of successors[j]!) if (usable[s] && gain[s]! + after[s]! > best) best = gain[s]! + after[s]!;
+    after[j] = best;
+  }
+  // Best gain per credit minute and per period day at positions ≥ j (positive gains only).
+  const perCredit = new Float64Array(m + 1);
+  const perDay = new Float64Array(m + 1);
+  for (let j = m - 1; j >= 0; j--) {
+    const k = eligible[j]!;
+    const g = usable[j] ? Math.max(0, gain[j]!) : 0;
+    perCredit[j] = Math.max(perCredit[j + 1]!, g / Math.max(1, problem.pairings[k]!.creditMinutes));
+    perDay[j] = Math.max(perDay[j + 1]!, g / Math.max(1, problem.periodDays[k]!.length));
+  }
+  const ahead = (chain: number, from: number, creditUsed: number, daysUsed: number) =>
+    Math.min(chain, (problem.maxCreditMinutes - creditUsed) * perCredit[from]!, (c.maxWorkedDays - daysUsed) * perDay[from]!);
+  let rootChain = 0;
+  for (let j = 0; j < m; j++) if (usable[j] && gain[j]! + after[j]! > rootChain) rootChain = gain[j]! + after[j]!;
+  // Children are tried best first: the chain value of the duals, plus what the
+  // trip alone does to the crew member's score (a guide for the order only).
+  const alone = request.scoreWeight > 0 ? scoreAlone(problem, c) : undefined;
+  const key = Float64Array.from(eligible, (_, j) => gain[j]! + after[j]! + (alone ? request.scoreWeight * alone[j]! : 0));
+  const order = (js: readonly number[]) => js.filter((j) => usable[j]).sort((a, b) => key[b]! - key[a]! || a - b);
+  const rootChildren = order(eligible.map((_, j) => j));
+  const childrenOf = new Map<number, number[]>();
+  const children = (j: number) => {
+    let known = childrenOf.get(j);
+    if (!known) childrenOf.set(j, (known = order(successors[j]!)));
+    return known;
+  };
+
+  const { scoreWeight, maxLines, nodeLimit } = request;
+  const pairings = problem.pairings;
+  const found: PricedLine[] = [];
+  let floor = request.threshold;
+  const admit = (line: PricedLine) => {
+    found.push(line);
+    found.sort((a, b) => b.value - a.value || compareLines(a.pairings, b.pairings));
+    if (found.length > maxLines) found.pop();
+    if (found.length === maxLines) floor = Math.max(request.threshold, found.at(-1)!.value);
+  };
+
+  const path: number[] = [];
+  const line: Pairing[] = [];
+  const dayCount = new Uint16Array(problem.periodLength);
+  let worked = 0;
+  let credit = 0;
+  let gainSum = 0;
+  let nodes = 0;
+  let stopped = false;
+  // states[d]: the engine after path[0..d-1]; states[0] is the fresh line.
+  const states: (LineState | undefined)[] = [start(c.crew, problem.instance.ruleSet, problem.engine)];
+
+  /** The engine's state after the whole path, or the depth whose trip breaks a duty rule. */
+  const engineState = (): LineState | number => {
+    for (let d = 1; d <= path.length; d++) {
+      if (states[d]) continue;
+      const r = extendAll(states[d - 1]!, { kind: "pairing", pairing: pairings[eligible[path[d - 1]!]!]! });
+      if (r.violations.length) return d;
+      states[d] = r.state;
+    }
+    return states[path.length]!;
+  };
+
+  /** Visits the current path as a line, then its extensions; returns the depth to unwind to (dead prefix) or Infinity. */
+  const visit = (from: number, chainAfter: number): number => {
+    nodes++;
+    const bounds = scoreWeight > 0 ? wishBounds(problem, c, path, dayCount, credit, from) : undefined;
+    const optimistic = bounds?.ahead ?? 0;
+    if (gainSum + ahead(chainAfter, from, credit, worked) + scoreWeight * optimistic <= floor) return Infinity;
+    // The path itself as a line (below the credit minimum it cannot be legal).
+    const here = bounds?.here ?? 0;
+    if (credit >= problem.minCreditMinutes && gainSum + scoreWeight * here > floor) {
+      const score = scoreLine(problem, c, path.map((j) => eligible[j]!));
+      const value = scoreWeight * score + gainSum;
+      if (value > floor) {
+        const state = engineState();
+        if (typeof state === "number") return state;
+        if (finish(state).legal) admit({ pairings: path.map((j) => eligible[j]!), score, value });
+      }
+    }
+    const next = path.length === 0 ? rootChildren : children(path.at(-1)!);
+    for (const j of next) {
+      if (nodes >= nodeLimit) {
+        stopped = true;
+        return Infinity;
+      }
+      const k = eligible[j]!;
+      const p = pairings[k]!;
+      if (credit + p.creditMinutes > problem.maxCreditMinutes) continue;
+      const days = problem.periodDays[k]!;
+      let newDays = 0;
+      for (const d of days) if (dayCount[d] === 0) newDays++;
+      if (worked + newDays > c.maxWorkedDays) continue;
+      if (gainSum + gain[j]! + ahead(after[j]!, j + 1, credit + p.creditMinutes, worked + newDays) + scoreWeight * optimistic <= floor) continue;
+      // push
+      path.push(j);
+      line.push(p);
+      for (const d of days) dayCount[d]!++;
+      worked += newDays;
+      credit += p.creditMinutes;
+      gainSum += gain[j]!;
+      states[path.length] = undefined;
+      const dead = visit(j + 1, after[j]!);
+      // pop
+      gainSum -= gain[j]!;
+      credit -= p.creditMinutes;
+      worked -= newDays;
+      for (const d of days) dayCount[d]!--;
+      line.pop();
+      path.pop();
+      states.length = path.length + 1;
+      if (dead <= path.length) return dead;
+      if (stopped) return Infinity;
+    }
+    return Infinity;
+  };
+  visit(0, rootChain);
+
+  const best = found[0]?.value ?? -Infinity;
+  const rootBound = rootChain + scoreWeight * wishBounds(problem, c, [], new Uint16Array(problem.periodLength), 0, 0).ahead;
+  return { lines: found, upperBound: stopped ? Math.max(best, rootBound) : Math.max(best, request.threshold), exhausted: !stopped, nodes };
+}
+
+function compareLines(a: readonly number[], b: readonly number[]): number {
+  for (let k = 0; k < Math.min(a.length, b.length); k++) if (a[k] !== b[k]) return a[k]! - b[k]!;
+  return a.length - b.length;
+}
+
+/** The best line-holder score of each crew member alone (0 when none is legal), and whether each search was exhaustive. */
+export function bestScores(problem: AwardProblem, nodeLimit: number): { best: number[]; exhausted: boolean[]; lines: (number[] | undefined)[] } {
+  const zero = new Float64Array(problem.pairings.length);
+  const best: number[] = [];
+  const exhausted: boolean[] = [];
+  const lines: (number[] | undefined)[] = [];
+  for (const c of problem.crew) {
+    const r = priceLines(problem, c, { scoreWeight: 1, cost: zero, threshold: 0, maxLines: 1, nodeLimit });
+    best.push(r.lines[0]?.score ?? 0);
+    lines.push(r.lines[0]?.pairings);
+    exhausted.push(r.exhausted);
+  }
+  return { best, exhausted, lines };
+}
+

@@ -1,0 +1,151 @@
+/**
+ * One award group made ready for solving: crew in seniority order with their
+ * weights and wishes, each crew member's eligible pairings and the legal
+ * successor relation between them (the network), and the pairings that no
+ * one may fly because they break the rule set by themselves.
+ */
+import type { CrewMember, Instance, Pairing, Wish } from "../domain/index.ts";
+import { lineScore, type ScoreContext } from "../domain/index.ts";
+import { pairingDates } from "../domain/pairing-facts.ts";
+import { daysBetween, instantMs } from "../domain/time.ts";
+import { canFollow, checkLine, dutyRulesOnly, extendAll, start, type EngineContext, type LineResult } from "../rules/index.ts";
+import { requiredDaysOff } from "../rules/index.ts";
+
+export interface CrewProblem {
+  crew: CrewMember;
+  /** 0 = most senior */
+  rank: number;
+  /** W_i: see seniorityWeight() */
+  weight: number;
+  wishes: readonly Wish[];
+  /** pairing indices this crew member may fly, by report time */
+  eligible: number[];
+  /** successors[k]: positions in `eligible` (after k) whose pairing may follow eligible[k] */
+  successors: number[][];
+  /** the most base-local period dates a line may work (days-off rule), Infinity without one */
+  maxWorkedDays: number;
+}
+
+export interface IllegalPairing {
+  pairingId: string;
+  text: string;
+}
+
+export interface AwardProblem {
+  instance: Instance;
+  pairings: readonly Pairing[];
+  /** crew of the group's position each pairing needs */
+  need: number[];
+  /** report and release, epoch ms */
+  startMs: number[];
+  endMs: number[];
+  /** per pairing: its base-local dates inside the period, as day numbers from the period's start */
+  periodDays: number[][];
+  engine: EngineContext;
+  score: ScoreContext;
+  /** seniority order */
+  crew: CrewProblem[];
+  illegal: IllegalPairing[];
+  /** the credit window's maximum, Infinity without one */
+  maxCreditMinutes: number;
+  /** the credit window's minimum for a line-holder line, 0 without one */
+  minCreditMinutes: number;
+  periodLength: number;
+}
+
+/**
+ * The seniority weight of the crew member of 0-based rank `rank` among `n`:
+ * 1 + β(n − 1 − rank)/n — the most senior gets 1 + β(n − 1)/n, the most junior 1
+ * (AWARD-MODEL.md's W_i = 1 + β(n − i)/n with i counted from 1) — times the
+ * crew member's carried fairness weight.
+ */
+export function seniorityWeight(rank: number, n: number, beta: number, carriedWeight: number): number {
+  return (1 + (beta * (n - 1 - rank)) / n) * carriedWeight;
+}
+
+/** Prepares an instance (already parsed by instanceSchema). */
+export function prepareProblem(instance: Instance): AwardProblem {
+  const { period, ruleSet, settings, group } = instance;
+  const engine: EngineContext = { stations: instance.stations, zone: period.zone, periodStart: period.startDate, periodEnd: period.endDate };
+  const score: ScoreContext = { zone: period.zone, periodStart: period.startDate, periodEnd: period.endDate };
+  const pairings = instance.pairings;
+  const need = pairings.map((p) => p.crewNeeded[group.position] ?? 0);
+  const startMs = pairings.map((p) => instantMs(p.dutyPeriods[0]!.report));
+  const endMs = pairings.map((p) => instantMs(p.dutyPeriods.at(-1)!.release));
+  const periodLength = daysBetween(period.startDate, period.endDate) + 1;
+  const periodDays = pairings.map((p) =>
+    pairingDates(p, period.zone)
+      .map((date) => daysBetween(period.startDate, date))
+      .filter((d) => d >= 0 && d < periodLength),
+  );
+
+  // A pairing that breaks a duty or rest rule by itself, for a crew member
+  // with no history, is illegal for everyone: reported and left open.
+  const dutyOnly = dutyRulesOnly(ruleSet);
+  const illegal: IllegalPairing[] = [];
+  const illegalAt = new Set<number>();
+  const neutral: CrewMember = {
+    id: "-", name: "-", seniority: 1, base: group.base, position: group.position, qualifications: [],
+    fixedActivities: [], carryIn: [], lookBack: { duties: [], dailyFlightMinutes: [] }, carriedWeight: 1,
+  };
+  pairings.forEach((p, k) => {
+    if (need[k]! <= 0) return;
+    const r = extendAll(start(neutral, dutyOnly, engine), { kind: "pairing", pairing: p });
+    if (r.violations.length) {
+      illegalAt.add(k);
+      illegal.push({ pairingId: p.id, text: r.violations.map((v) => v.text).join("; ") });
+    }
+  });
+
+  const creditRule = ruleSet.rules.find((r) => (r.params.check ?? r.id) === "credit-window");
+  const maxCredit = creditRule?.params.maxMinutes;
+  const maxCreditMinutes = typeof maxCredit === "number" ? maxCredit : Infinity;
+  const minCredit = creditRule?.params.minMinutes;
+  const minCreditMinutes = typeof minCredit === "number" ? minCredit : 0;
+  const hasDaysOff = ruleSet.rules.some((r) => (r.params.check ?? r.id) === "min-days-off");
+  const maxWorkedDays = hasDaysOff ? periodLength - requiredDaysOff(ruleSet.rules, periodLength, false) : Infinity;
+
+  const order = pairings.map((_, k) => k).sort((a, b) => startMs[a]! - startMs[b]! || pairings[a]!.id.localeCompare(pairings[b]!.id));
+  const sorted = [...instance.crew].sort((a, b) => a.seniority - b.seniority);
+  const n = sorted.length;
+  const crew = sorted.map((member, rank): CrewProblem => {
+    const fresh = start(member, ruleSet, engine);
+    const eligible = order.filter((k) => {
+      if (need[k]! <= 0 || illegalAt.has(k)) return false;
+      const p = pairings[k]!;
+      if (!p.requires.every((q) => member.qualifications.includes(q))) return false;
+      if (p.creditMinutes > maxCreditMinutes) return false;
+      // Legal on its own for this crew member: history, carry-in and fixed activities.
+      return extendAll(fresh, { kind: "pairing", pairing: p }).violations.length === 0;
+    });
+    const successors = eligible.map((a, i) => {
+      const next: number[] = [];
+      for (let j = i + 1; j < eligible.length; j++) {
+        const b = eligible[j]!;
+        if (startMs[b]! >= endMs[a]! && canFollow(member, ruleSet, pairings[a]!, pairings[b]!, engine)) next.push(j);
+      }
+      return next;
+    });
+    return {
+      crew: member,
+      rank,
+      weight: seniorityWeight(rank, n, settings.seniorityWeight, member.carriedWeight),
+      wishes: instance.bids[member.id] ?? [],
+      eligible,
+      successors,
+      maxWorkedDays,
+    };
+  });
+  return { instance, pairings, need, startMs, endMs, periodDays, engine, score, crew, illegal, maxCreditMinutes, minCreditMinutes, periodLength };
+}
+
+/** The score of a line-holder line of pairing indices for crew member `c` (lineScore, the one contract). */
+export function scoreLine(problem: AwardProblem, c: CrewProblem, line: readonly number[]): number {
+  return lineScore(c.wishes, line.map((k) => problem.pairings[k]!), problem.score, problem.instance.settings);
+}
+
+/** The legality engine's verdict on a line (or, with `reserve`, the reserve line). */
+export function checkCrewLine(problem: AwardProblem, c: CrewProblem, line: readonly number[], reserve = false): LineResult {
+  const items = line.map((k) => ({ kind: "pairing" as const, pairing: problem.pairings[k]! }));
+  return checkLine(c.crew, problem.instance.ruleSet, items, problem.engine, { reserve });
+}

@@ -1,0 +1,392 @@
+/**
+ * The award engine (weighted balance): instance in, award out.
+ *
+ * 1. prepare — eligibility and networks (problem.ts), each crew member's best
+ *    line alone (best_i, for satisfaction), and the greedy award as a first
+ *    integer solution;
+ * 2. coverage — column generation on the master LP with objective −Σ c_p u_p
+ *    (open credit minutes, ties by open positions), then an integer solve on the
+ *    generated lines → U*;
+ * 3. wishes — the master keeps Σ c_p u_p ≤ U* and maximises
+ *    Σ_i W_i · s_iℓ/best_i (less a penalty on fairness-floor slack); column
+ *    generation again, then the integer solve;
+ * 4. closing the gap — when the integer solution falls short of the LP bound
+ *    by g, every line whose reduced profit is at least −g is generated (no
+ *    other line can be part of a better integer solution) and the integer
+ *    solve repeated: when that enumeration completes, the award is optimal.
+ *
+ * The LP bound reported is the Lagrangian bound z_RMP + Σ_i max(0, best
+ * reduced profit of crew i), which is valid even when pricing stopped at its
+ * node limit, and equals the LP optimum when pricing is exhausted.
+ * Deterministic: pricing and HiGHS both run in a fixed order with fixed seeds.
+ */
+import type { Instance, Stats } from "../domain/index.ts";
+import { AppError } from "../domain/index.ts";
+import { assembleAward, type Assembled, type Choice } from "./assemble.ts";
+import { greedyChoices } from "./greedy.ts";
+import { loadHighs, Master, type MasterColumn, type SolveOutcome } from "./master.ts";
+import { prepareProblem, type AwardProblem } from "./problem.ts";
+import { bestScores, priceLines } from "./pricing.ts";
+
+export type AwardPhase = "prepare" | "coverage" | "wishes" | "integer" | "done";
+
+export interface Progress {
+  phase: AwardPhase;
+  /** of the whole run, 0–100 */
+  percent: number;
+  message: string;
+}
+
+export interface AwardOptions {
+  onProgress?: (progress: Progress) => void;
+  /** polled between pricing calls and inside HiGHS; true cancels the run */
+  shouldStop?: () => boolean;
+  /** search nodes per pricing call (default 20,000) */
+  nodeLimit?: number;
+  /** search nodes of the quick pricing tried first in each round (default 1,000) */
+  quickNodeLimit?: number;
+  /** lines added per crew member and round (default 3) */
+  linesPerRound?: number;
+  /** lines enumerated per crew member when closing the gap (default 400) */
+  closingLines?: number;
+}
+
+export interface AwardReport {
+  method: "column-generation" | "greedy" | "compact-mip";
+  openCreditMinutes: number;
+  openPositions: number;
+  /** phase 1's LP bound on open credit (minutes; a lower bound) */
+  coverageLpBound: number;
+  /** Σ W_i · satisfaction_i of the award, less the fairness penalty */
+  objective: number;
+  /** upper bound on `objective` over every award with the same coverage */
+  lpBound: number;
+  /** (lpBound − objective) / max(1, |lpBound|) */
+  gap: number;
+  /** the integer solve is proven optimal over all legal lines */
+  provenOptimal: boolean;
+  illegalPairings: { pairingId: string; text: string }[];
+  /** crew whose satisfaction fell below the fairness floor, and by how much */
+  fairnessShortfalls: { crewId: string; shortfall: number }[];
+  /** best_i per crew id (0: no legal line-holder line) */
+  best: Record<string, number>;
+  /** W_i per crew id */
+  weights: Record<string, number>;
+  warnings: string[];
+  /** the duals of the last master LP of phase 2, for audits (reduced profit = coefficient·score − crew − Σ pairings) */
+  finalDuals?: { crew: Record<string, number>; pairings: Record<string, number>; scoreCoefficient: Record<string, number> };
+}
+
+export interface AwardResult {
+  award: Assembled["award"];
+  stats: Stats;
+  report: AwardReport;
+}
+
+const TOL = 1e-7;
+/** per unit of satisfaction below the floor, in units of W (large against any W_i) */
+const FAIRNESS_PENALTY = 100;
+
+class Clock {
+  readonly times: Record<string, number> = {};
+  private readonly t0 = performance.now();
+  constructor(private readonly limitMs: number) {}
+  phase<T>(name: string, run: () => T): T {
+    const start = performance.now();
+    try {
+      return run();
+    } finally {
+      this.times[name] = (this.times[name] ?? 0) + (performance.now() - start);
+    }
+  }
+  /** seconds left before `share` of the time limit has gone (1: the whole limit) */
+  remainingSeconds(share = 1): number {
+    return Math.max(0, (this.limitMs * share - (performance.now() - this.t0)) / 1000);
+  }
+  expired(share = 1): boolean {
+    return this.remainingSeconds(share) <= 0;
+  }
+}
+
+export async function solveAward(instance: Instance, options: AwardOptions = {}): Promise<AwardResult> {
+  const settings = instance.settings;
+  if (settings.mode !== "balanced") {
+    throw new AppError("invalid", `settings.mode is "${settings.mode}"; this engine awards in "balanced" mode only (strict seniority comes with part 2 of the award engine)`);
+  }
+  const clock = new Clock(settings.timeLimitSeconds * 1000);
+  const nodeLimit = options.nodeLimit ?? 20_000;
+  const quickNodes = Math.min(nodeLimit, options.quickNodeLimit ?? 1_000);
+  const linesPerRound = options.linesPerRound ?? 3;
+  const roundLimit = settings.iterationLimit ?? Infinity;
+  const warnings: string[] = [];
+  const cancelled = () => options.shouldStop?.() === true;
+  // Shares of the time limit: column generation for coverage until 30 %, its
+  // integer solve until 40 %, for wishes until 75 %, the final integer solve the rest.
+  let share = 0.3;
+  const stop = () => cancelled() || clock.expired(share);
+  const progress = (phase: AwardPhase, percent: number, message: string) => options.onProgress?.({ phase, percent, message });
+  let stoppedBy: Stats["stoppedBy"] = "optimal";
+  const noteStop = () => {
+    if (cancelled()) stoppedBy = "cancelled";
+    else if (clock.expired(share)) stoppedBy = "time-limit";
+  };
+
+  progress("prepare", 0, "Reading the instance and building each crew member's network");
+  const problem = clock.phase("prepare", () => prepareProblem(instance));
+  const n = problem.crew.length;
+  progress("prepare", 5, "Finding each crew member's best line alone");
+  const alone = clock.phase("best-lines", () => bestScores(problem, nodeLimit * 5));
+  const best = alone.best;
+  if (alone.exhausted.some((e) => !e)) {
+    warnings.push(`best line alone not proven for ${alone.exhausted.filter((e) => !e).length} crew (search limit); satisfaction is measured against the best line found`);
+  }
+  const greedy = clock.phase("greedy", () => greedyChoices(problem, nodeLimit));
+  if (cancelled()) throw new AppError("conflict", "the award run was cancelled");
+
+  const highs = await loadHighs();
+  const need = new Map<number, number>();
+  problem.need.forEach((d, k) => {
+    if (d > 0 && !problem.illegal.some((x) => x.pairingId === problem.pairings[k]!.id)) need.set(k, d);
+  });
+  const totalPositions = [...need.values()].reduce((t, d) => t + d, 0);
+  const openCost = new Map([...need.keys()].map((k) => [k, problem.pairings[k]!.creditMinutes + 1 / (1 + totalPositions)]));
+  const noLine = best.filter((b) => b <= 0).length;
+  const { min: reserveMin, max: reserveMaxSetting } = settings.reserve;
+  let reserveMax = reserveMaxSetting ?? n;
+  if (noLine > reserveMax) {
+    warnings.push(`${noLine} crew have no legal line, more than the reserve maximum ${reserveMax}: they hold reserve anyway`);
+    reserveMax = noLine;
+  }
+  const master = new Master(highs, n, need, { min: reserveMin, max: reserveMax });
+  try {
+    // Phase 2's objective coefficient of a column; phase 1 values every line 0.
+    const wishCoefficient = (col: Pick<MasterColumn, "crew" | "score" | "reserve">) =>
+      col.reserve || best[col.crew]! <= 0 ? 0 : (problem.crew[col.crew]!.weight * col.score) / best[col.crew]!;
+    const fairnessCoefficient = (col: Pick<MasterColumn, "crew" | "score" | "reserve">) =>
+      col.reserve ? 0 : best[col.crew]! <= 0 ? 1 : col.score / best[col.crew]!;
+    let phase: "coverage" | "wishes" = "coverage";
+    const addColumn = (col: MasterColumn) =>
+      master.add(col, phase === "coverage" ? 0 : wishCoefficient(col), phase === "wishes" ? fairnessCoefficient(col) : 0);
+
+    problem.crew.forEach((_, i) => addColumn({ crew: i, pairings: [], reserve: true, score: 0 }));
+    problem.crew.forEach((c, i) => {
+      const line = alone.lines[i];
+      if (line) addColumn({ crew: i, pairings: line, reserve: false, score: best[i]! });
+    });
+    const greedyColumns = greedy.map((g, i): MasterColumn => ({ crew: i, pairings: g.pairings, reserve: g.reserve, score: g.score }));
+    greedyColumns.forEach(addColumn);
+    const startColumns = greedyColumns;
+
+    let rounds = 0;
+    let lastDuals: Float64Array = new Float64Array(0);
+    let allExhausted = false;
+
+    /** Column generation to the LP optimum (or a limit); returns the LP objective and the Lagrangian bound. */
+    const generate = (from: number, to: number): { lp: SolveOutcome; bound: number; exhausted: boolean } => {
+      let bound = Infinity;
+      let quickFailed = false;
+      for (let round = 0; ; round++) {
+        const lp = clock.phase(`${phase}-lp`, () => master.solveLp(clock.remainingSeconds(share), stop));
+        const y = (lastDuals = master.duals());
+        if (lp.status !== "optimal") {
+          noteStop();
+          return { lp, bound, exhausted: false };
+        }
+        const cost = pairingCosts(y);
+        let added = 0;
+        let lagrangian = lp.objective;
+        const deep = quickFailed;
+        let exhausted = true;
+        clock.phase(`${phase}-pricing`, () => {
+          for (const [i, c] of problem.crew.entries()) {
+            if (stop()) {
+              exhausted = false;
+              break;
+            }
+            const yi = y[master.crewRow[i]!]!;
+            const request = { scoreWeight: scoreWeight(i, y), cost, threshold: yi + TOL, maxLines: linesPerRound, nodeLimit: quickNodes };
+            // A quick search first; the full one only when the quick one finds nothing and could not finish.
+            let r = priceLines(problem, c, request);
+            if (r.lines.length === 0 && !r.exhausted && deep) r = priceLines(problem, c, { ...request, nodeLimit });
+            exhausted &&= r.exhausted;
+            if (process.env.AWARD_DEBUG) console.error(phase, round, i, "nodes", r.nodes, "exh", r.exhausted, "lines", r.lines.length, "ub-y", (r.upperBound - yi).toFixed(3), "elig", c.eligible.length);
+            lagrangian += Math.max(0, r.upperBound - yi);
+            for (const line of r.lines) if (addColumn({ crew: i, pairings: line.pairings, reserve: false, score: line.score })) added++;
+          }
+        });
+        rounds++;
+        if (exhausted) bound = Math.min(bound, lagrangian);
+        else if (Number.isFinite(lagrangian)) bound = Math.min(bound, lagrangian);
+        const fraction = Math.min(1, round / 20);
+        progress(phase, from + (to - from) * fraction, `${phase === "coverage" ? "Covering the trips" : "Granting wishes"}: round ${rounds}, ${master.columns.length} lines, LP ${lp.objective.toFixed(3)}`);
+        if (added === 0 && !deep && !exhausted) {
+          quickFailed = true; // the next round searches deeper
+          continue;
+        }
+        quickFailed = false;
+        if (added === 0) {
+          if (!exhausted) noteStop();
+          return { lp, bound: exhausted ? lp.objective : bound, exhausted };
+        }
+        if (rounds >= roundLimit) {
+          stoppedBy = "iteration-limit";
+          return { lp, bound, exhausted: false };
+        }
+      }
+    };
+
+    const pairingCosts = (y: Float64Array) => {
+      const cost = new Float64Array(problem.pairings.length);
+      for (const [p, row] of master.coverRow) cost[p] = y[row]!;
+      return cost;
+    };
+    const scoreWeight = (i: number, y: Float64Array) => {
+      if (phase === "coverage" || best[i]! <= 0) return 0;
+      const fair = master.fairRow[i];
+      const yf = fair === undefined ? 0 : y[fair]!;
+      return (problem.crew[i]!.weight - yf) / best[i]!;
+    };
+
+    /** The integer solve, then closing the gap by enumerating every line within it; returns the chosen columns. */
+    const integer = (bound: number, exhausted: boolean, start: readonly MasterColumn[] | undefined) => {
+      let mip = clock.phase(`${phase}-mip`, () => master.solveMip(clock.remainingSeconds(share), stop, 1e-9, start));
+      let proven = false;
+      if (mip.status !== "optimal") noteStop();
+      if (exhausted && mip.status === "optimal") {
+        const gapAbs = bound - mip.objective;
+        if (gapAbs <= 1e-7 * Math.max(1, Math.abs(bound))) proven = true;
+        else {
+          const y = lastDuals;
+          const cost = pairingCosts(y);
+          let complete = true;
+          let added = 0;
+          clock.phase(`${phase}-closing`, () => {
+            for (const [i, c] of problem.crew.entries()) {
+              const yi = y[master.crewRow[i]!]!;
+              const cap = options.closingLines ?? 400;
+              const r = priceLines(problem, c, { scoreWeight: scoreWeight(i, y), cost, threshold: yi - gapAbs - TOL, maxLines: cap, nodeLimit: nodeLimit * 5 });
+              if (!r.exhausted || r.lines.length >= cap) complete = false;
+              for (const line of r.lines) if (addColumn({ crew: i, pairings: line.pairings, reserve: false, score: line.score })) added++;
+            }
+          });
+          const chosen = chosenColumns();
+          if (added > 0) mip = clock.phase(`${phase}-mip`, () => master.solveMip(clock.remainingSeconds(share), stop, 1e-9, chosen));
+          proven = complete && mip.status === "optimal";
+        }
+      }
+      const chosen = chosenColumns();
+      const fallback = [...(start ?? greedyColumns)];
+      const valid = feasible(chosen);
+      if (mip.status === "optimal" && valid) return { mip, proven, chosen };
+      // Stopped early: keep the better of what the solve holds and the solution it started from.
+      if (valid && value(chosen) >= value(fallback) - 1e-9) return { mip, proven: false, chosen };
+      warnings.push(`the ${phase} integer solve stopped without improving on its starting solution`);
+      return { mip, proven: false, chosen: fallback };
+    };
+    const coverageOf = (cols: readonly MasterColumn[]) => {
+      const left = new Map(need);
+      for (const col of cols) for (const p of col.pairings) left.set(p, left.get(p)! - 1);
+      return [...left].reduce((t, [p, open]) => t + openCost.get(p)! * open, 0);
+    };
+    let coverageLimit = Infinity;
+    /** One line per crew member, no trip over-covered, reserve within bounds, coverage kept. */
+    const feasible = (cols: readonly MasterColumn[]) => {
+      if (cols.length !== n || new Set(cols.map((col) => col.crew)).size !== n) return false;
+      const left = new Map(need);
+      for (const col of cols) for (const p of col.pairings) left.set(p, left.get(p)! - 1);
+      if ([...left.values()].some((open) => open < 0)) return false;
+      const reserves = cols.filter((col) => col.reserve).length;
+      return reserves >= reserveMin && reserves <= reserveMax && coverageOf(cols) <= coverageLimit;
+    };
+    /** The phase's objective of a full solution (larger is better). */
+    const value = (cols: readonly MasterColumn[]) =>
+      phase === "coverage" ? -coverageOf(cols) : cols.reduce((t, col) => t + wishCoefficient(col), 0);
+    const chosenColumns = () => {
+      const x = master.values();
+      return master.columns.filter((_, k) => x[k]! > 0.5);
+    };
+
+    // Phase 1: coverage.
+    master.setCoverageObjective(openCost);
+    const cover = generate(10, 40);
+    // A lower bound on open credit: −(phase 1's upper bound), less the tie-break share.
+    const coverageLpBound = Number.isFinite(cover.bound) ? Math.max(0, -cover.bound - totalPositions / (1 + totalPositions)) : 0;
+    share = 0.4;
+    const cover1 = integer(cover.lp.objective, cover.exhausted, startColumns);
+    // Phase 1's integer optimum, counted from the lines chosen (Σ c_p u_p).
+    const coverage = coverageOf(cover1.chosen);
+    allExhausted = cover.exhausted;
+
+    // Phase 2: wishes with the coverage kept.
+    phase = "wishes";
+    const floor = settings.fairnessFloor;
+    coverageLimit = coverage + 1e-6 * Math.max(1, coverage);
+    master.setWishObjective(
+      openCost,
+      coverageLimit,
+      (col) => wishCoefficient(col),
+      floor !== undefined ? { floor, penalty: FAIRNESS_PENALTY, coefficient: fairnessCoefficient, crewCount: n } : undefined,
+    );
+    share = 0.75;
+    const wishes = generate(45, 85);
+    share = 1;
+    allExhausted &&= wishes.exhausted;
+    progress("integer", 88, "Choosing one line per crew member");
+    const final = integer(wishes.bound, wishes.exhausted, cover1.chosen);
+
+    // The award.
+    const byCrew = new Map(final.chosen.map((col) => [col.crew, col]));
+    const choices: Choice[] = problem.crew.map((_, i) => {
+      const col = byCrew.get(i);
+      if (!col) throw new AppError("internal", `the integer solve left crew ${problem.crew[i]!.crew.id} without a line`);
+      return { reserve: col.reserve, pairings: col.pairings };
+    });
+    const assembled = clock.phase("assemble", () => assembleAward(problem, choices, best));
+    const fairnessShortfalls =
+      floor === undefined
+        ? []
+        : assembled.award.lines.flatMap((l) => (l.satisfaction < floor - 1e-9 ? [{ crewId: l.crewId, shortfall: floor - l.satisfaction }] : []));
+    const constant = problem.crew.reduce((t, c, i) => t + (best[i]! <= 0 ? c.weight : 0), 0);
+    const penalty = fairnessShortfalls.reduce((t, s) => t + FAIRNESS_PENALTY * s.shortfall, 0);
+    const objective = assembled.weightedSatisfaction - penalty;
+    const lpBound = Number.isFinite(wishes.bound) ? Math.max(objective, wishes.bound + constant) : Infinity;
+    const gap = Number.isFinite(lpBound) ? (lpBound - objective) / Math.max(1, Math.abs(lpBound)) : Infinity;
+    const y = lastDuals;
+    const finalDuals = {
+      crew: Object.fromEntries(problem.crew.map((c, i) => [c.crew.id, y[master.crewRow[i]!]!])),
+      pairings: Object.fromEntries([...master.coverRow].map(([p, row]) => [problem.pairings[p]!.id, y[row]!])),
+      scoreCoefficient: Object.fromEntries(problem.crew.map((c, i) => [c.crew.id, scoreWeight(i, y)])),
+    };
+    progress("done", 100, `Done: ${assembled.openPositions} open positions, gap ${(gap * 100).toFixed(2)} %`);
+    const stats: Stats = {
+      times: clock.times,
+      columns: master.columns.length,
+      rounds,
+      ...(Number.isFinite(gap) ? { gap, lpBound } : {}),
+      objective,
+      stoppedBy,
+    };
+    return {
+      award: assembled.award,
+      stats,
+      report: {
+        method: "column-generation",
+        openCreditMinutes: assembled.openCreditMinutes,
+        openPositions: assembled.openPositions,
+        coverageLpBound,
+        objective,
+        lpBound,
+        gap,
+        provenOptimal: allExhausted && cover1.proven && final.proven,
+        illegalPairings: problem.illegal,
+        fairnessShortfalls,
+        best: Object.fromEntries(problem.crew.map((c, i) => [c.crew.id, best[i]!])),
+        weights: Object.fromEntries(problem.crew.map((c) => [c.crew.id, c.weight])),
+        warnings,
+        finalDuals,
+      },
+    };
+  } finally {
+    master.dispose();
+  }
+}
