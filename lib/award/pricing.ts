@@ -264,6 +264,8 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   let gainSum = 0;
   let nodes = 0;
   let stopped = false;
+  // With the node limit reached: the best bound among the subtrees not yet searched.
+  let frontier = -Infinity;
   // states[d]: the engine after path[0..d-1]; states[0] is the fresh line.
   const states: (LineState | undefined)[] = [start(c.crew, problem.instance.ruleSet, problem.engine)];
 
@@ -296,9 +298,20 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
       }
     }
     const next = path.length === 0 ? rootChildren : children(path.at(-1)!);
-    for (const j of next) {
+    // What the unvisited children from index `from` on could reach (a bound; days ahead are not charged).
+    const rest = (fromIndex: number) => {
+      for (let x = fromIndex; x < next.length; x++) {
+        const j = next[x]!;
+        const k = eligible[j]!;
+        const b = gainSum + gain[j]! + ahead(after[j]!, j + 1, credit + pairings[k]!.creditMinutes, worked) + scoreWeight * optimistic;
+        if (b > frontier) frontier = b;
+      }
+    };
+    for (let index = 0; index < next.length; index++) {
+      const j = next[index]!;
       if (nodes >= nodeLimit) {
         stopped = true;
+        rest(index);
         return Infinity;
       }
       const k = eligible[j]!;
@@ -327,15 +340,18 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
       path.pop();
       states.length = path.length + 1;
       if (dead <= path.length) return dead;
-      if (stopped) return Infinity;
+      if (stopped) {
+        rest(index + 1);
+        return Infinity;
+      }
     }
     return Infinity;
   };
   visit(0, rootChain);
 
+  // Every line not returned was pruned below the floor (≤ the threshold or the best found) or lies in an unsearched subtree.
   const best = found[0]?.value ?? -Infinity;
-  const rootBound = rootChain + scoreWeight * wishBounds(problem, c, [], new Uint16Array(problem.periodLength), 0, 0).ahead;
-  return { lines: found, upperBound: stopped ? Math.max(best, rootBound) : Math.max(best, request.threshold), exhausted: !stopped, nodes };
+  return { lines: found, upperBound: Math.max(best, request.threshold, stopped ? frontier : -Infinity), exhausted: !stopped, nodes };
 }
 
 function compareLines(a: readonly number[], b: readonly number[]): number {
