@@ -202,9 +202,10 @@ export class Master {
   /** Solves the LP relaxation; duals follow from `duals()`. */
   solveLp(timeLimit: number, stop: () => boolean): SolveOutcome {
     this.model.clearIntegrality();
+    this.model.options.set({ solver: "choose" });
     const outcome = this.run(timeLimit, stop);
     if (outcome.status === "infeasible" || outcome.status === "other") {
-      throw new AppError("internal", `the master LP could not be solved (${outcome.status})`);
+      throw new AppError("internal", `the master LP could not be solved (${outcome.status}, HiGHS model status ${this.model.getModelStatus()})`);
     }
     return outcome;
   }
@@ -245,7 +246,7 @@ export class Master {
       for (const [p, col] of this.openCol) x[col] = Math.max(0, open.get(p) ?? 0);
       this.model.setSolution({ colValue: x });
     }
-    this.model.options.set({ mip_rel_gap: gapTolerance, mip_abs_gap: 1e-9 });
+    this.model.options.set({ mip_rel_gap: gapTolerance, mip_abs_gap: 1e-9, solver: "choose" });
     const outcome = this.run(timeLimit, stop);
     const bound = Number(this.model.info.get("mip_dual_bound"));
     this.model.clearIntegrality();

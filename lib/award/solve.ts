@@ -84,6 +84,8 @@ export interface AwardResult {
 }
 
 const TOL = 1e-7;
+/** Wentges smoothing weight of the dual centre */
+const SMOOTHING = 0.5;
 /** per unit of satisfaction below the floor, in units of W (large against any W_i) */
 const FAIRNESS_PENALTY = 100;
 
@@ -182,9 +184,20 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     let allExhausted = false;
 
     /** Column generation to the LP optimum (or a limit); returns the LP objective and the Lagrangian bound. */
+    /**
+     * Column generation to the LP optimum (or a limit); returns the last LP, the
+     * best Lagrangian bound and whether the last pricing was exhaustive.
+     * Set-partitioning LPs are degenerate and their duals jump about, so most
+     * rounds price at smoothed duals (Wentges 1997: α·centre + (1 − α)·current,
+     * the centre being the duals of the best bound so far) and keep only the
+     * lines of positive reduced profit at the current duals. A round that finds
+     * none prices at the current duals (quick, then deep), which alone can end
+     * the phase and which alone yields bounds.
+     */
     const generate = (from: number, to: number): { lp: SolveOutcome; bound: number; exhausted: boolean } => {
       let bound = Infinity;
-      let quickFailed = false;
+      let centre: Float64Array | undefined;
+      let mode: "smooth" | "plain" | "deep" = "plain";
       for (let round = 0; ; round++) {
         const lp = clock.phase(`${phase}-lp`, () => master.solveLp(clock.remainingSeconds(share), stop));
         const y = (lastDuals = master.duals());
@@ -192,10 +205,11 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
           noteStop();
           return { lp, bound, exhausted: false };
         }
-        const cost = pairingCosts(y);
+        const at = mode === "smooth" && centre ? centre.map((v, r) => SMOOTHING * v + (1 - SMOOTHING) * y[r]!) : y;
+        const cost = pairingCosts(at);
+        const current = pairingCosts(y);
         let added = 0;
         let lagrangian = lp.objective;
-        const deep = quickFailed;
         let exhausted = true;
         clock.phase(`${phase}-pricing`, () => {
           for (const [i, c] of problem.crew.entries()) {
@@ -204,33 +218,40 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
               break;
             }
             const yi = y[master.crewRow[i]!]!;
-            const request = { scoreWeight: scoreWeight(i, y), cost, threshold: yi + TOL, maxLines: linesPerRound, nodeLimit: quickNodes };
-            // A quick search first; the full one only when the quick one finds nothing and could not finish.
+            const request = { scoreWeight: scoreWeight(i, at), cost, threshold: at[master.crewRow[i]!]! + TOL, maxLines: linesPerRound, nodeLimit: quickNodes };
             let r = priceLines(problem, c, request);
-            if (r.lines.length === 0 && !r.exhausted && deep) r = priceLines(problem, c, { ...request, nodeLimit });
+            if (mode === "deep" && r.lines.length === 0 && !r.exhausted) r = priceLines(problem, c, { ...request, nodeLimit });
             exhausted &&= r.exhausted;
-            if (process.env.AWARD_DEBUG) console.error(phase, round, i, "nodes", r.nodes, "exh", r.exhausted, "lines", r.lines.length, "ub-y", (r.upperBound - yi).toFixed(3), "elig", c.eligible.length);
-            lagrangian += Math.max(0, r.upperBound - yi);
-            for (const line of r.lines) if (addColumn({ crew: i, pairings: line.pairings, reserve: false, score: line.score })) added++;
+            if (mode !== "smooth") lagrangian += Math.max(0, r.upperBound - yi);
+            const weight = scoreWeight(i, y);
+            for (const line of r.lines) {
+              let profit = weight * line.score - yi;
+              for (const k of line.pairings) profit -= current[k]!;
+              if (profit > TOL && addColumn({ crew: i, pairings: line.pairings, reserve: false, score: line.score })) added++;
+            }
           }
         });
         rounds++;
-        if (exhausted) bound = Math.min(bound, lagrangian);
-        else if (Number.isFinite(lagrangian)) bound = Math.min(bound, lagrangian);
-        const fraction = Math.min(1, round / 20);
+        if (mode !== "smooth" && Number.isFinite(lagrangian) && lagrangian < bound) {
+          bound = lagrangian;
+          centre = y;
+        }
+        const fraction = Math.min(1, round / 30);
         progress(phase, from + (to - from) * fraction, `${phase === "coverage" ? "Covering the trips" : "Granting wishes"}: round ${rounds}, ${master.columns.length} lines, LP ${lp.objective.toFixed(3)}`);
-        if (added === 0 && !deep && !exhausted) {
-          quickFailed = true; // the next round searches deeper
-          continue;
-        }
-        quickFailed = false;
-        if (added === 0) {
-          if (!exhausted) noteStop();
-          return { lp, bound: exhausted ? lp.objective : bound, exhausted };
-        }
         if (rounds >= roundLimit) {
           stoppedBy = "iteration-limit";
           return { lp, bound, exhausted: false };
+        }
+        if (added > 0) {
+          // Smoothed and plain rounds alternate, so the centre keeps moving to better bounds.
+          mode = mode !== "smooth" && centre ? "smooth" : "plain";
+          continue;
+        }
+        if (mode === "smooth") mode = "plain";
+        else if (mode === "plain" && !exhausted) mode = "deep";
+        else {
+          if (!exhausted) noteStop();
+          return { lp, bound: exhausted ? Math.min(bound, lp.objective) : bound, exhausted };
         }
       }
     };

@@ -1,0 +1,272 @@
+/**
+ * The compact MIP: the textbook baseline the column-generation engine
+ * (solve.ts) is measured against. One HiGHS MIP, maximised, with per crew i:
+ *
+ *     x_ip ∈ {0,1} per eligible pairing p, r_i ∈ {0,1} reserve
+ *     Σ_p x_ip + M r_i ≤ M                        reserve holds no pairings (M = |eligible_i|)
+ *     x_ia + x_ib ≤ 1                             a before b and b not among a's successors
+ *     min (1 − r_i) ≤ Σ_p c_p x_ip ≤ max          credit window
+ *     z_id ≥ x_ip (p touches date d), Σ_d∈period z_id ≤ maxWorkedDays
+ *
+ * and per pairing Σ_i x_ip + u_p = d_p, u_p ≥ 0, and min ≤ Σ_i r_i ≤ max.
+ *
+ * Objective, lexicographic by weighting: −K Σ_p ((1 + P) c_p + 1) u_p (open
+ * credit minutes, ties by open positions; P = Σ_p d_p, K = 1 + the largest
+ * value the wish part can take, so one open minute outweighs every wish) plus
+ * Σ_i W_i (B (1 − r_i) + Σ_r rankDecay^r y_ir) / best_i, with y_ir ≤ 1 − r_i and
+ * - trip: y ≤ Σ_selected x / count, y ≤ 1 (exact);
+ * - no-trip: y ≤ 1 − x_p for each selected p (exact);
+ * - free-days: y ≤ 1 − Σ_named d z_d / |named| (exact: dates no eligible trip touches are free);
+ * - credit: y ≤ credit/min and y ≤ 1; above the maximum, the chord
+ *   y ≤ 1 − (credit − max)/C̄ of max/credit on [max, C̄] (C̄ the most credit a line can hold);
+ * - rhythm and buddy are left out of the model: they count as met (an
+ *   optimistic constant), since neither is linear in x without many more rows.
+ * So the wish part never understates a line's score, and the rows above are
+ * necessary for legality (the pairwise rules only get easier as the gap
+ * grows), which makes the model a relaxation and its dual bound honest.
+ *
+ * The model only approximates legality: every line is re-checked with
+ * checkCrewLine and, when illegal, loses pairings from the end until legal, or
+ * becomes reserve; every line is then scored exactly by assembleAward.
+ */
+import type { Instance, Stats, TripSelection } from "../domain/index.ts";
+import { AppError, matchesTripSelection, pairingDates, rankWeight } from "../domain/index.ts";
+import { assembleAward, type Choice } from "./assemble.ts";
+import { greedyChoices } from "./greedy.ts";
+import { loadHighs } from "./master.ts";
+import { checkCrewLine, prepareProblem } from "./problem.ts";
+import { bestScores } from "./pricing.ts";
+import type { AwardResult } from "./solve.ts";
+
+export interface CompactMipOptions {
+  /** HiGHS time limit (default: settings.timeLimitSeconds), counted from the call */
+  timeLimitSeconds?: number;
+  /** polled inside HiGHS; true stops the solve with the incumbent */
+  shouldStop?: () => boolean;
+}
+
+/** A MIP in row form: columns with cost and bounds, rows as sparse terms. */
+class Mip {
+  readonly cost: number[] = [];
+  readonly lower: number[] = [];
+  readonly upper: number[] = [];
+  readonly integer: (0 | 1)[] = [];
+  readonly rowLower: number[] = [];
+  readonly rowUpper: number[] = [];
+  readonly starts: number[] = [0];
+  readonly index: number[] = [];
+  readonly value: number[] = [];
+  col(cost: number, lower: number, upper: number, integer = false): number {
+    this.cost.push(cost);
+    this.lower.push(lower);
+    this.upper.push(upper);
+    this.integer.push(integer ? 1 : 0);
+    return this.cost.length - 1;
+  }
+  row(lower: number, upper: number, terms: readonly (readonly [number, number])[]): void {
+    for (const [col, a] of terms) {
+      this.index.push(col);
+      this.value.push(a);
+    }
+    this.starts.push(this.index.length);
+    this.rowLower.push(lower);
+    this.rowUpper.push(upper);
+  }
+}
+
+export async function compactMipAward(instance: Instance, options: CompactMipOptions = {}): Promise<AwardResult> {
+  const { settings } = instance;
+  if (settings.mode !== "balanced") throw new AppError("invalid", `settings.mode is "${settings.mode}"; the compact baseline awards in "balanced" mode only`);
+  const t0 = performance.now();
+  const limitSeconds = options.timeLimitSeconds ?? settings.timeLimitSeconds;
+  const problem = prepareProblem(instance);
+  const t1 = performance.now();
+  const alone = bestScores(problem, 100_000);
+  const best = alone.best;
+  const t2 = performance.now();
+  const { pairings, need, crew } = problem;
+  const { zone, periodStart, periodEnd } = problem.score;
+  const warnings: string[] = [];
+  const B = settings.baseLineValue;
+  const P = need.reduce((t, d) => t + d, 0);
+  const scale = crew.map((c, i) => (best[i]! > 0 ? c.weight / best[i]! : 0));
+  const K = 1 + crew.reduce((t, c, i) => t + scale[i]! * c.wishes.reduce((s, _, r) => s + rankWeight(r, settings.rankDecay), B), 0);
+  const noLineWeight = crew.reduce((t, c, i) => t + (best[i]! <= 0 ? c.weight : 0), 0);
+  let offset = noLineWeight; // constants of the objective, kept out of HiGHS
+
+  const m = new Mip();
+  const cover = pairings.map((p, k) => [[m.col(-K * ((1 + P) * p.creditMinutes + 1), 0, need[k]!), 1] as [number, number]]);
+  const dates = pairings.map((p) => pairingDates(p, zone));
+  const inPeriod = (d: string) => d >= periodStart && d <= periodEnd;
+  const reserveCols: number[] = [];
+  const xCols: number[][] = [];
+  crew.forEach((c, i) => {
+    const w = scale[i]!;
+    const buddyMet = problem.score.buddyLine ? 1 : 0;
+    const lineBase = c.wishes.reduce((t, wish, r) => t + (wish.kind === "rhythm" ? 1 : wish.kind === "buddy" ? buddyMet : 0) * rankWeight(r, settings.rankDecay), B);
+    offset += w * lineBase;
+    const fixedReserve = best[i]! <= 0 && (alone.exhausted[i] || c.eligible.length === 0); // proven: no legal line
+    const r = m.col(-w * lineBase, fixedReserve ? 1 : 0, 1, true);
+    reserveCols.push(r);
+    const x = c.eligible.map((k) => {
+      const col = m.col(0, 0, 1, true);
+      cover[k]!.push([col, 1]);
+      return col;
+    });
+    xCols.push(x);
+    const M = x.length;
+    if (M > 0) m.row(-Infinity, M, [...x.map((col) => [col, 1] as const), [r, M]]);
+    c.eligible.forEach((_, a) => {
+      const follows = new Set(c.successors[a]);
+      for (let b = a + 1; b < M; b++) if (!follows.has(b)) m.row(-Infinity, 1, [[x[a]!, 1], [x[b]!, 1]]);
+    });
+    const credit = x.map((col, j) => [col, pairings[c.eligible[j]!]!.creditMinutes] as const);
+    if (problem.minCreditMinutes > 0) m.row(problem.minCreditMinutes, Infinity, [...credit, [r, problem.minCreditMinutes]]);
+    if (M > 0 && Number.isFinite(problem.maxCreditMinutes)) m.row(-Infinity, problem.maxCreditMinutes, credit);
+    const creditCap = Math.min(problem.maxCreditMinutes, credit.reduce((t, [, a]) => t + a, 0));
+    // Date variables z_d ≥ x_p, made when a row needs them.
+    const touching = new Map<string, number[]>();
+    c.eligible.forEach((k, j) => dates[k]!.forEach((d) => touching.set(d, [...(touching.get(d) ?? []), j])));
+    const dayCol = new Map<string, number>();
+    const day = (d: string) => {
+      let col = dayCol.get(d);
+      if (col === undefined) {
+        dayCol.set(d, (col = m.col(0, 0, 1)));
+        for (const j of touching.get(d)!) m.row(0, Infinity, [[col, 1], [x[j]!, -1]]);
+      }
+      return col;
+    };
+    const periodDates = [...touching.keys()].filter(inPeriod);
+    if (periodDates.length > c.maxWorkedDays) m.row(-Infinity, c.maxWorkedDays, periodDates.map((d) => [day(d), 1] as const));
+    c.wishes.forEach((wish, rank) => {
+      if (wish.kind === "rhythm" || wish.kind === "buddy" || w === 0) return;
+      const y = m.col(w * rankWeight(rank, settings.rankDecay), 0, 1);
+      m.row(-Infinity, 1, [[y, 1], [r, 1]]);
+      const selected = (sel: TripSelection) => x.filter((_, j) => matchesTripSelection(sel, pairings[c.eligible[j]!]!, zone));
+      switch (wish.kind) {
+        case "trip":
+          m.row(-Infinity, 0, [[y, 1], ...selected(wish).map((col) => [col, -1 / wish.count] as const)]);
+          break;
+        case "no-trip":
+          for (const col of selected(wish)) m.row(-Infinity, 1, [[y, 1], [col, 1]]);
+          break;
+        case "free-days": {
+          const named = wish.dates.filter((d) => touching.has(d));
+          if (named.length) m.row(-Infinity, 1, [[y, 1], ...named.map((d) => [day(d), 1 / wish.dates.length] as const)]);
+          break;
+        }
+        case "credit":
+          if (wish.minMinutes) m.row(-Infinity, 0, [[y, 1], ...credit.map(([col, a]) => [col, -a / wish.minMinutes!] as const)]);
+          if (wish.maxMinutes !== undefined && creditCap > wish.maxMinutes) {
+            m.row(-Infinity, 1 + wish.maxMinutes / creditCap, [[y, 1], ...credit.map(([col, a]) => [col, a / creditCap] as const)]);
+          }
+          break;
+      }
+    });
+  });
+  cover.forEach((terms, k) => m.row(need[k]!, need[k]!, terms));
+  const noLine = best.filter((b) => b <= 0).length;
+  const reserveMax = Math.max(noLine, settings.reserve.max ?? crew.length);
+  if (settings.reserve.min > 0 || reserveMax < crew.length) m.row(settings.reserve.min, reserveMax, reserveCols.map((col) => [col, 1] as const));
+
+  // Solve.
+  const highs = await loadHighs();
+  const model = highs.createModel();
+  let status: Stats["stoppedBy"] = "optimal";
+  let dualBound = Number.NaN;
+  let x: Float64Array | undefined;
+  try {
+    model.passModel({
+      numCols: m.cost.length,
+      numRows: m.rowLower.length,
+      sense: highs.constants.objectiveSense.maximize,
+      colCost: m.cost,
+      colLower: m.lower,
+      colUpper: m.upper,
+      rowLower: m.rowLower,
+      rowUpper: m.rowUpper,
+      matrix: { format: "csr", numRows: m.rowLower.length, numCols: m.cost.length, starts: m.starts, indices: m.index, values: m.value },
+      integrality: m.integer,
+    });
+    const seconds = Math.max(0.01, limitSeconds - (performance.now() - t0) / 1000);
+    model.options.set({ output_flag: false, random_seed: settings.seed ?? 0, time_limit: seconds, mip_rel_gap: 0, mip_abs_gap: 1e-7 });
+    const result = model.run({ [highs.constants.callbackType.mipInterrupt]: (e: { interrupt(): void }) => void (options.shouldStop?.() && e.interrupt()) });
+    const codes = highs.constants.modelStatus;
+    if (result.modelStatus === codes.interrupted) status = "cancelled";
+    else if (result.modelStatus !== codes.optimal) status = "time-limit";
+    dualBound = Number(model.info.get("mip_dual_bound"));
+    if (Number(model.info.get("primal_solution_status")) === highs.constants.solutionStatus.feasible) x = model.getSolution().colValue;
+  } finally {
+    model.dispose();
+  }
+  const t3 = performance.now();
+
+  // Lines: from the MIP, made legal; the greedy award when HiGHS found no solution.
+  let repaired = 0;
+  let choices: Choice[];
+  if (x) {
+    const sol = x;
+    choices = crew.map((c, i): Choice => {
+      if (sol[reserveCols[i]!]! > 0.5) return { reserve: true, pairings: [] };
+      const line = c.eligible.filter((_, j) => sol[xCols[i]![j]!]! > 0.5); // already by report time
+      const before = line.length;
+      while (line.length && !checkCrewLine(problem, c, line).legal) line.pop();
+      const legal = line.length > 0 || checkCrewLine(problem, c, []).legal;
+      if (line.length < before || !legal) repaired++;
+      return legal ? { reserve: false, pairings: line } : { reserve: true, pairings: [] };
+    });
+    if (repaired) warnings.push(`${repaired} lines of the compact model were illegal and were cut back or made reserve`);
+  } else {
+    warnings.push(`HiGHS found no integer solution (${status}); the greedy award is returned`);
+    choices = greedyChoices(problem, 20_000);
+  }
+  const assembled = assembleAward(problem, choices, best);
+  const objective = assembled.weightedSatisfaction;
+
+  // The bound: D ≥ −K·cov + wishes for every model solution, and every legal award is one,
+  // so an award of coverage cost cov has weighted satisfaction ≤ D + K·cov; and cov ≥ (C0 − D)/K.
+  const D = dualBound + offset;
+  const cov = (1 + P) * assembled.openCreditMinutes + assembled.openPositions;
+  let lpBound = D + K * cov;
+  if (settings.fairnessFloor !== undefined) {
+    warnings.push("the compact baseline ignores the fairness floor: lpBound is NaN (not comparable)");
+    lpBound = Number.NaN;
+  } else if (!Number.isFinite(lpBound)) {
+    lpBound = Number.NaN; // no bound from HiGHS (stopped before the root)
+  } else if (lpBound < objective - 1e-6) {
+    warnings.push(`the MIP bound ${lpBound} is below the award's ${objective}: the model was not a relaxation here; lpBound is NaN`);
+    lpBound = Number.NaN;
+  } else lpBound = Math.max(lpBound, objective);
+  const minCov = Number.isFinite(D) ? Math.max(0, Math.ceil((noLineWeight - D) / K - 1e-6)) : 0;
+  const coverageLpBound = Math.floor(minCov / (1 + P));
+  const gap = Number.isNaN(lpBound) ? Number.NaN : (lpBound - objective) / Math.max(1, Math.abs(lpBound));
+  const provenOptimal = status === "optimal" && cov <= minCov && gap <= 1e-7;
+  if (settings.fairnessFloor === undefined && status === "optimal" && cov > minCov) warnings.push("the repair lost coverage against the model's optimum");
+  const stats: Stats = {
+    times: { prepare: t1 - t0, "best-lines": t2 - t1, "compact-mip": t3 - t2, assemble: performance.now() - t3 },
+    columns: 0,
+    rounds: 0,
+    ...(Number.isNaN(gap) ? {} : { gap, lpBound }),
+    objective,
+    stoppedBy: status,
+  };
+  return {
+    award: assembled.award,
+    stats,
+    report: {
+      method: "compact-mip",
+      openCreditMinutes: assembled.openCreditMinutes,
+      openPositions: assembled.openPositions,
+      coverageLpBound,
+      objective,
+      lpBound,
+      gap,
+      provenOptimal,
+      illegalPairings: problem.illegal,
+      fairnessShortfalls: [],
+      best: Object.fromEntries(crew.map((c, i) => [c.crew.id, best[i]!])),
+      weights: Object.fromEntries(crew.map((c) => [c.crew.id, c.weight])),
+      warnings,
+    },
+  };
+}
