@@ -34,9 +34,9 @@ export function greedyAward(instance: Instance, options: { nodeLimit?: number } 
   const nodeLimit = options.nodeLimit ?? 20_000;
   const problem = prepareProblem(instance);
   const t1 = performance.now();
-  const { best } = bestScores(problem, nodeLimit * 5);
+  const { best } = bestScores(problem, nodeLimit * 2);
   const t2 = performance.now();
-  const choices = greedyChoices(problem, nodeLimit);
+  const choices = greedyChoices(problem, nodeLimit / 4);
   const assembled = assembleAward(problem, choices, best);
   const t3 = performance.now();
   return {

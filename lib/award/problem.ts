@@ -106,6 +106,20 @@ export function prepareProblem(instance: Instance): AwardProblem {
   const maxWorkedDays = hasDaysOff ? periodLength - requiredDaysOff(ruleSet.rules, periodLength, false) : Infinity;
 
   const order = pairings.map((_, k) => k).sort((a, b) => startMs[a]! - startMs[b]! || pairings[a]!.id.localeCompare(pairings[b]!.id));
+  // Which pairing may follow which: asked once for the group, since the
+  // pairwise rules read nothing of a crew member but the base, which the whole
+  // group shares (checks/min-rest.ts, no-overlap.ts, days-between-trips.ts).
+  const P = pairings.length;
+  const follows = new Uint8Array(P * P);
+  const anyone = instance.crew[0];
+  if (anyone) {
+    for (const a of order) {
+      if (need[a]! <= 0) continue;
+      for (const b of order) {
+        if (need[b]! > 0 && startMs[b]! >= endMs[a]! && canFollow(anyone, ruleSet, pairings[a]!, pairings[b]!, engine)) follows[a * P + b] = 1;
+      }
+    }
+  }
   const sorted = [...instance.crew].sort((a, b) => a.seniority - b.seniority);
   const n = sorted.length;
   const crew = sorted.map((member, rank): CrewProblem => {
@@ -122,7 +136,7 @@ export function prepareProblem(instance: Instance): AwardProblem {
       const next: number[] = [];
       for (let j = i + 1; j < eligible.length; j++) {
         const b = eligible[j]!;
-        if (startMs[b]! >= endMs[a]! && canFollow(member, ruleSet, pairings[a]!, pairings[b]!, engine)) next.push(j);
+        if (follows[a * P + b] === 1) next.push(j);
       }
       return next;
     });

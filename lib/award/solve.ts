@@ -137,12 +137,12 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
   const problem = clock.phase("prepare", () => prepareProblem(instance));
   const n = problem.crew.length;
   progress("prepare", 5, "Finding each crew member's best line alone");
-  const alone = clock.phase("best-lines", () => bestScores(problem, nodeLimit * 5));
+  const alone = clock.phase("best-lines", () => bestScores(problem, nodeLimit * 2));
   const best = alone.best;
   if (alone.exhausted.some((e) => !e)) {
     warnings.push(`best line alone not proven for ${alone.exhausted.filter((e) => !e).length} crew (search limit); satisfaction is measured against the best line found`);
   }
-  const greedy = clock.phase("greedy", () => greedyChoices(problem, nodeLimit));
+  const greedy = clock.phase("greedy", () => greedyChoices(problem, nodeLimit / 4));
   if (cancelled()) throw new AppError("conflict", "the award run was cancelled");
 
   const highs = await loadHighs();

@@ -1,0 +1,74 @@
+/**
+ * One benchmark run in a process of its own (so that peak memory is this
+ * method's alone): `tsx lib/cli/bench-award-one.ts <instance> <method> <seconds>`
+ * prints one JSON line of figures. Instances: "S", "M", "L" (generated, seed 1,
+ * captains) and "pub1:BAB"-style (the published data set's instance and base).
+ */
+import type { Instance } from "../domain/index.ts";
+import { instanceSchema } from "../domain/index.ts";
+import { greedyAward, solveAward, type AwardResult } from "../award/index.ts";
+import { fairnessReport } from "../fairness/index.ts";
+import { generatePeriod } from "../../seed/generator/generate-period.ts";
+import { loadKasirzadeh } from "../../seed/published/kasirzadeh-2017.ts";
+
+export const GENERATED = {
+  S: { crew: 30, pairings: 120 },
+  M: { crew: 150, pairings: 600 },
+  L: { crew: 300, pairings: 1650 },
+} as const;
+
+export function benchInstance(name: string): Instance {
+  const size = GENERATED[name as keyof typeof GENERATED];
+  if (size) return generatePeriod({ ...size, days: 31, seed: 1, positions: ["captain"] }).instances[0]!;
+  const match = /^pub([12]):([A-Z]{3})$/.exec(name);
+  if (!match) throw new Error(`unknown benchmark instance "${name}"`);
+  const { instances } = loadKasirzadeh(`tests/fixtures/kasirzadeh-2017/instance${match[1]}`, { seed: 7 });
+  const found = instances.find((i) => i.group.base === match[2]);
+  if (!found) throw new Error(`no base ${match[2]} in published instance ${match[1]}`);
+  return found;
+}
+
+async function main(): Promise<void> {
+  const [name, method, seconds] = process.argv.slice(2);
+  if (!name || !method || !seconds) throw new Error("usage: bench-award-one <instance> <method> <seconds>");
+  const base = benchInstance(name);
+  const instance = instanceSchema.parse({ ...base, settings: { ...base.settings, mode: "balanced", timeLimitSeconds: Number(seconds) } });
+  const t0 = performance.now();
+  let result: AwardResult;
+  if (method === "column-generation") result = await solveAward(instance);
+  else if (method === "greedy") result = greedyAward(instance);
+  else if (method === "compact-mip") {
+    const { compactMipAward } = await import("../award/compact-mip.ts");
+    result = await compactMipAward(instance, { timeLimitSeconds: Number(seconds) });
+  } else throw new Error(`unknown method "${method}"`);
+  const elapsed = (performance.now() - t0) / 1000;
+  const seniority = new Map(instance.crew.map((c) => [c.id, c.seniority]));
+  const fairness = fairnessReport(result.award.lines.map((l) => ({ seniority: seniority.get(l.crewId)!, satisfaction: l.satisfaction })));
+  const positions = instance.pairings.reduce((t, p) => t + (p.crewNeeded[instance.group.position] ?? 0), 0);
+  const { report, stats } = result;
+  console.log(
+    JSON.stringify({
+      instance: name,
+      method,
+      crew: instance.crew.length,
+      pairings: instance.pairings.length,
+      seconds: elapsed,
+      positions,
+      openPositions: report.openPositions,
+      openCreditMinutes: report.openCreditMinutes,
+      coverageLpBound: report.coverageLpBound,
+      mean: fairness.mean,
+      min: fairness.min,
+      jain: fairness.jain,
+      objective: report.objective,
+      lpBound: Number.isFinite(report.lpBound) ? report.lpBound : null,
+      gap: Number.isFinite(report.gap) ? report.gap : null,
+      columns: stats.columns,
+      rounds: stats.rounds,
+      stoppedBy: stats.stoppedBy ?? null,
+      peakMB: process.resourceUsage().maxRSS / 1024,
+    }),
+  );
+}
+
+if (process.argv[1]?.endsWith("bench-award-one.ts")) await main();

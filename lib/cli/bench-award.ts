@@ -1,0 +1,95 @@
+/**
+ * The award benchmark (`npm run bench:award -- [--instances S,M,L,pub1:BAA,…]
+ * [--methods column-generation,greedy,compact-mip] [--time-limit 180]`): every
+ * method on every instance at the same time limit, one after the other, each in
+ * its own process (peak memory is per method), side by side in one run on one
+ * machine. Prints the table and writes it to docs/benchmarks.md.
+ * Targets (issue 5): L weighted ≤ 3 minutes with gap ≤ 0.5 % and ≤ 2 GB;
+ * coverage 100 % wherever the LP shows it possible.
+ */
+import { execFileSync } from "node:child_process";
+import fs from "node:fs";
+import os from "node:os";
+import { parseArgs } from "node:util";
+
+const { values } = parseArgs({
+  options: {
+    instances: { type: "string", default: "S,M,L,pub1:BAA,pub1:BAB,pub1:BAC,pub2:BAA,pub2:BAB,pub2:BAC" },
+    methods: { type: "string", default: "column-generation,greedy,compact-mip" },
+    "time-limit": { type: "string", default: "180" },
+    out: { type: "string", default: "docs/benchmarks.md" },
+  },
+});
+const instances = values.instances.split(",");
+const methods = values.methods.split(",");
+const seconds = values["time-limit"];
+
+interface Row {
+  instance: string;
+  method: string;
+  crew?: number;
+  pairings?: number;
+  seconds?: number;
+  positions?: number;
+  openPositions?: number;
+  openCreditMinutes?: number;
+  coverageLpBound?: number;
+  mean?: number;
+  min?: number;
+  jain?: number;
+  gap?: number | null;
+  columns?: number;
+  rounds?: number;
+  stoppedBy?: string | null;
+  peakMB?: number;
+  error?: string;
+}
+
+const rows: Row[] = [];
+for (const instance of instances) {
+  for (const method of methods) {
+    process.stderr.write(`${instance} ${method} … `);
+    try {
+      const out = execFileSync("node_modules/.bin/tsx", ["lib/cli/bench-award-one.ts", instance, method, seconds], {
+        encoding: "utf8",
+        // a method may overrun its limit while finishing; give it twice the limit, then record the overrun
+        timeout: (Number(seconds) * 2 + 120) * 1000,
+        maxBuffer: 16 * 1024 * 1024,
+      });
+      const row = JSON.parse(out.trim().split("\n").at(-1)!) as Row;
+      rows.push(row);
+      process.stderr.write(`${row.seconds!.toFixed(1)} s\n`);
+    } catch (e) {
+      const message = (e as { killed?: boolean }).killed ? `killed after ${Number(seconds) * 2 + 120} s` : String((e as Error).message).split("\n")[0]!;
+      rows.push({ instance, method, error: message });
+      process.stderr.write(`failed: ${message}\n`);
+    }
+  }
+}
+
+const f = (x: number | undefined | null, digits = 3) => (x === undefined || x === null ? "—" : x.toFixed(digits));
+const table = [
+  "| instance | crew × pairings | method | time (s) | open positions | open time (h) | LP bound on open time (h) | mean sat. | min sat. | Jain | gap to LP bound | lines | rounds | stopped by | peak memory (MB) |",
+  "| --- | --- | --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | --- | ---: |",
+  ...rows.map((r) =>
+    r.error
+      ? `| ${r.instance} | | ${r.method} | | | | | | | | | | | ${r.error} | |`
+      : `| ${r.instance} | ${r.crew} × ${r.pairings} | ${r.method} | ${f(r.seconds, 1)} | ${r.openPositions} of ${r.positions} | ${f(r.openCreditMinutes! / 60, 1)} | ${r.method === "column-generation" ? f(r.coverageLpBound! / 60, 1) : "—"} | ${f(r.mean)} | ${f(r.min)} | ${f(r.jain)} | ${r.gap === null || r.gap === undefined ? "—" : `${(r.gap * 100).toFixed(2)} %`} | ${r.columns ?? "—"} | ${r.rounds ?? "—"} | ${r.stoppedBy ?? "—"} | ${f(r.peakMB, 0)} |`,
+  ),
+].join("\n");
+
+const doc = `# Award benchmark
+
+Written by \`npm run bench:award\` (lib/cli/bench-award.ts); do not edit by hand.
+
+- Run: ${new Date().toISOString().slice(0, 16).replace("T", " ")} UTC on ${os.cpus().length} × ${os.cpus()[0]?.model ?? "unknown CPU"}, Node ${process.version}; every run one after the other in its own process, at a time limit of ${seconds} s.
+- Instances: S (30 crew, 120 pairings), M (150, 600) and L (300, 1,650), generated for 31 days with seed 1 (the fictional Larkfield Air, captains at Halvern); pubN:BASE is the published instance N (Kasirzadeh, Saddoune & Soumis 2017) at one crew base, under the data set's own rule set.
+- Mode: weighted balance (β = 1, rank decay 0.8, no fairness floor). Satisfaction is each crew member's score over the best line they could hold alone.
+- "Gap to LP bound" is (bound − objective) / bound with the engine's Lagrangian bound; the greedy award has no bound. "LP bound on open time" is the engine's lower bound on the open time any award can reach.
+
+${table}
+`;
+fs.mkdirSync("docs", { recursive: true });
+fs.writeFileSync(values.out, doc);
+console.log(table);
+console.log(`wrote ${values.out}`);
