@@ -4,7 +4,7 @@ import { crewIdSchema, pairingIdSchema } from "./ids.ts";
 import { positionSchema } from "./position.ts";
 import { stationCodeSchema } from "./station.ts";
 import { instantMs } from "./time.ts";
-import { instantSchema, localDateSchema, minutesSchema } from "./time-schemas.ts";
+import { instantSchema, localDateSchema, minutesSchema, whenFieldsValid } from "./time-schemas.ts";
 
 function endsAfterStart(value: { start: string; end: string }): boolean {
   return instantMs(value.end) > instantMs(value.start);
@@ -18,7 +18,7 @@ export const fixedActivitySchema = z
     end: instantSchema,
     label: z.string().trim().max(120).optional(),
   })
-  .refine(endsAfterStart, { message: "an activity must end after it starts", path: ["end"] });
+  .refine(endsAfterStart, { message: "an activity must end after it starts", path: ["end"], ...whenFieldsValid });
 
 /** A fixed activity. */
 export type FixedActivity = z.infer<typeof fixedActivitySchema>;
@@ -42,6 +42,7 @@ export const pastDutySchema = z
     endStation: stationCodeSchema.optional().describe("where the crew member rested after it"),
   })
   .refine((duty) => instantMs(duty.release) > instantMs(duty.report), {
+    ...whenFieldsValid,
     message: "a past duty must be released after its report",
     path: ["release"],
   });

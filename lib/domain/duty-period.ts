@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { stationCodeSchema } from "./station.ts";
 import { instantMs } from "./time.ts";
-import { instantSchema, minutesSchema } from "./time-schemas.ts";
+import { instantSchema, minutesSchema, whenFieldsValid } from "./time-schemas.ts";
 
 /**
  * A leg: one flight, operated or ridden as a deadhead (positioning as a
@@ -27,7 +27,7 @@ export const legSchema = z
         message: `flight ${leg.flightNumber}: arrival ${leg.arrival} is not after its departure ${leg.departure}`,
       });
     }
-  })
+  }, whenFieldsValid)
   .meta({ id: "Leg", title: "Leg" });
 
 /** A leg. */
@@ -80,7 +80,7 @@ export const dutyPeriodSchema = z
         });
       }
     });
-  })
+  }, whenFieldsValid)
   .meta({ id: "DutyPeriod", title: "Duty period" });
 
 /** A duty period. */

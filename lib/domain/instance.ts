@@ -7,6 +7,7 @@ import { pairingSchema } from "./pairing.ts";
 import { bidPeriodSchema } from "./period.ts";
 import { ruleSetSchema } from "./rule-set.ts";
 import { schemaVersion } from "./schema-version.ts";
+import { whenFieldsValid } from "./time-schemas.ts";
 import { awardSettingsSchema } from "./settings.ts";
 import { stationSchema } from "./station.ts";
 import { wishListSchema } from "./wish.ts";
@@ -33,5 +34,5 @@ export type Instance = z.infer<typeof instanceObjectSchema>;
  * checks are listed in {@link checkInstance}.
  */
 export const instanceSchema = instanceObjectSchema
-  .superRefine(checkInstance)
+  .superRefine(checkInstance, whenFieldsValid)
   .meta({ title: "Instance", description: "One award group of a bid period: everything the award engine needs." });

@@ -4,7 +4,7 @@ import { pairingIdSchema } from "./ids.ts";
 import { positionSchema } from "./position.ts";
 import { stationCodeSchema } from "./station.ts";
 import { instantMs } from "./time.ts";
-import { minutesSchema } from "./time-schemas.ts";
+import { minutesSchema, whenFieldsValid } from "./time-schemas.ts";
 
 /** How many crew of each position a pairing needs; a missing position needs none. */
 export const crewNeededSchema = z.partialRecord(
@@ -66,7 +66,7 @@ export const pairingSchema = z
         });
       }
     });
-  })
+  }, whenFieldsValid)
   .meta({ id: "Pairing", title: "Pairing" });
 
 /** A pairing. */

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { daysBetween } from "./time.ts";
-import { localDateSchema, zoneSchema } from "./time-schemas.ts";
+import { localDateSchema, whenFieldsValid, zoneSchema } from "./time-schemas.ts";
 
 /** A bid period: its first and last dates (both included, base local) and the base's zone. */
 export const bidPeriodSchema = z
@@ -12,6 +12,7 @@ export const bidPeriodSchema = z
     zone: zoneSchema,
   })
   .refine((period) => daysBetween(period.startDate, period.endDate) >= 0, {
+    ...whenFieldsValid,
     message: "the period ends before it starts",
     path: ["endDate"],
   })

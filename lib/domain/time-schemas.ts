@@ -37,3 +37,10 @@ export const zoneSchema = z
 
 /** A duration in whole minutes, never negative. */
 export const minutesSchema = z.number().int("minutes must be whole").min(0, "minutes cannot be negative");
+
+/**
+ * For cross-field checks that read instants and dates: run only when every
+ * field parsed, so a bad field is reported at its path instead of making the
+ * check itself throw.
+ */
+export const whenFieldsValid = { when: (payload: { issues: readonly unknown[] }) => payload.issues.length === 0 };

@@ -85,3 +85,16 @@ describe("pairingSchema", () => {
     expect(pairingSchema.parse({ ...T202, crewNeeded: { purser: 1 } }).crewNeeded).toEqual({ purser: 1 });
   });
 });
+
+describe("an unreadable time inside a pairing", () => {
+  it("is reported at its path; the cross-field checks do not throw on it", () => {
+    const bad = structuredClone(T202) as unknown as { dutyPeriods: { report: string; legs: { arrival: string }[] }[] };
+    bad.dutyPeriods[0]!.report = "half past nine";
+    bad.dutyPeriods[0]!.legs[0]!.arrival = "tomorrow";
+    const result = pairingSchema.safeParse(bad);
+    expect(result.success).toBe(false);
+    const paths = result.error!.issues.map((issue) => issue.path.join("."));
+    expect(paths).toContain("dutyPeriods.0.report");
+    expect(paths).toContain("dutyPeriods.0.legs.0.arrival");
+  });
+});
