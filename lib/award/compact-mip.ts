@@ -29,6 +29,7 @@
  * checkCrewLine and, when illegal, loses pairings from the end until legal, or
  * becomes reserve; every line is then scored exactly by assembleAward.
  */
+import type { ModelData } from "highs";
 import type { Instance, Stats, TripSelection } from "../domain/index.ts";
 import { AppError, matchesTripSelection, pairingDates, rankWeight } from "../domain/index.ts";
 import { assembleAward, type Choice } from "./assemble.ts";
@@ -45,32 +46,30 @@ export interface CompactMipOptions {
   shouldStop?: () => boolean;
 }
 
-/** A MIP in row form: columns with cost and bounds, rows as sparse terms. */
+type Terms = readonly (readonly [col: number, coefficient: number])[];
+
+/** A MIP in row form, built column by column and row by row. */
 class Mip {
-  readonly cost: number[] = [];
-  readonly lower: number[] = [];
-  readonly upper: number[] = [];
-  readonly integer: (0 | 1)[] = [];
-  readonly rowLower: number[] = [];
-  readonly rowUpper: number[] = [];
-  readonly starts: number[] = [0];
-  readonly index: number[] = [];
-  readonly value: number[] = [];
+  readonly cols: { cost: number; lower: number; upper: number; integer: boolean }[] = [];
+  readonly rows: { lower: number; upper: number; terms: Terms }[] = [];
   col(cost: number, lower: number, upper: number, integer = false): number {
-    this.cost.push(cost);
-    this.lower.push(lower);
-    this.upper.push(upper);
-    this.integer.push(integer ? 1 : 0);
-    return this.cost.length - 1;
+    return this.cols.push({ cost, lower, upper, integer }) - 1;
   }
-  row(lower: number, upper: number, terms: readonly (readonly [number, number])[]): void {
-    for (const [col, a] of terms) {
-      this.index.push(col);
-      this.value.push(a);
-    }
-    this.starts.push(this.index.length);
-    this.rowLower.push(lower);
-    this.rowUpper.push(upper);
+  row(lower: number, upper: number, terms: Terms): void {
+    this.rows.push({ lower, upper, terms });
+  }
+  data(sense: ModelData["sense"]): ModelData {
+    const { cols, rows } = this;
+    const starts = [0];
+    for (const r of rows) starts.push(starts.at(-1)! + r.terms.length);
+    const matrix = { format: "csr" as const, numRows: rows.length, numCols: cols.length, starts };
+    return {
+      numCols: cols.length, numRows: rows.length, sense,
+      colCost: cols.map((c) => c.cost), colLower: cols.map((c) => c.lower), colUpper: cols.map((c) => c.upper),
+      rowLower: rows.map((r) => r.lower), rowUpper: rows.map((r) => r.upper),
+      matrix: { ...matrix, indices: rows.flatMap((r) => r.terms.map((t) => t[0])), values: rows.flatMap((r) => r.terms.map((t) => t[1])) },
+      integrality: cols.map((c) => (c.integer ? 1 : 0)),
+    };
   }
 }
 
@@ -172,28 +171,18 @@ export async function compactMipAward(instance: Instance, options: CompactMipOpt
   // Solve.
   const highs = await loadHighs();
   const model = highs.createModel();
-  let status: Stats["stoppedBy"] = "optimal";
+  let status: Stats["stoppedBy"];
   let dualBound = Number.NaN;
   let x: Float64Array | undefined;
   try {
-    model.passModel({
-      numCols: m.cost.length,
-      numRows: m.rowLower.length,
-      sense: highs.constants.objectiveSense.maximize,
-      colCost: m.cost,
-      colLower: m.lower,
-      colUpper: m.upper,
-      rowLower: m.rowLower,
-      rowUpper: m.rowUpper,
-      matrix: { format: "csr", numRows: m.rowLower.length, numCols: m.cost.length, starts: m.starts, indices: m.index, values: m.value },
-      integrality: m.integer,
-    });
+    model.passModel(m.data(highs.constants.objectiveSense.maximize));
     const seconds = Math.max(0.01, limitSeconds - (performance.now() - t0) / 1000);
     model.options.set({ output_flag: false, random_seed: settings.seed ?? 0, time_limit: seconds, mip_rel_gap: 0, mip_abs_gap: 1e-7 });
     const result = model.run({ [highs.constants.callbackType.mipInterrupt]: (e: { interrupt(): void }) => void (options.shouldStop?.() && e.interrupt()) });
     const codes = highs.constants.modelStatus;
-    if (result.modelStatus === codes.interrupted) status = "cancelled";
-    else if (result.modelStatus !== codes.optimal) status = "time-limit";
+    const code = result.modelStatus;
+    status = code === codes.optimal ? "optimal" : code === codes.timeLimit ? "time-limit" : code === codes.interrupted ? "cancelled" : undefined;
+    if (!status) warnings.push(`HiGHS ended with model status ${code}`);
     dualBound = Number(model.info.get("mip_dual_bound"));
     if (Number(model.info.get("primal_solution_status")) === highs.constants.solutionStatus.feasible) x = model.getSolution().colValue;
   } finally {
@@ -217,31 +206,30 @@ export async function compactMipAward(instance: Instance, options: CompactMipOpt
     });
     if (repaired) warnings.push(`${repaired} lines of the compact model were illegal and were cut back or made reserve`);
   } else {
-    warnings.push(`HiGHS found no integer solution (${status}); the greedy award is returned`);
+    warnings.push("HiGHS found no integer solution; the greedy award is returned");
     choices = greedyChoices(problem, 20_000);
   }
   const assembled = assembleAward(problem, choices, best);
   const objective = assembled.weightedSatisfaction;
 
-  // The bound: D ≥ −K·cov + wishes for every model solution, and every legal award is one,
-  // so an award of coverage cost cov has weighted satisfaction ≤ D + K·cov; and cov ≥ (C0 − D)/K.
+  // The bound. D (HiGHS's dual bound plus the constants kept out of HiGHS) is ≥ −K·cov + wishes
+  // + C0 for every model solution, wishes ≥ 0, and every legal award is one (a relaxation): so
+  // every legal award has cov ≥ minCov = ⌈(C0 − D)/K⌉, and one of coverage cost cov has weighted
+  // satisfaction ≤ D + K·cov. That is the engine's lpBound (a bound at the optimal coverage)
+  // only when this award's coverage is proven optimal (cov = minCov); otherwise NaN.
   const D = dualBound + offset;
   const cov = (1 + P) * assembled.openCreditMinutes + assembled.openPositions;
-  let lpBound = D + K * cov;
-  if (settings.fairnessFloor !== undefined) {
-    warnings.push("the compact baseline ignores the fairness floor: lpBound is NaN (not comparable)");
-    lpBound = Number.NaN;
-  } else if (!Number.isFinite(lpBound)) {
-    lpBound = Number.NaN; // no bound from HiGHS (stopped before the root)
-  } else if (lpBound < objective - 1e-6) {
-    warnings.push(`the MIP bound ${lpBound} is below the award's ${objective}: the model was not a relaxation here; lpBound is NaN`);
-    lpBound = Number.NaN;
-  } else lpBound = Math.max(lpBound, objective);
   const minCov = Number.isFinite(D) ? Math.max(0, Math.ceil((noLineWeight - D) / K - 1e-6)) : 0;
-  const coverageLpBound = Math.floor(minCov / (1 + P));
-  const gap = Number.isNaN(lpBound) ? Number.NaN : (lpBound - objective) / Math.max(1, Math.abs(lpBound));
-  const provenOptimal = status === "optimal" && cov <= minCov && gap <= 1e-7;
-  if (settings.fairnessFloor === undefined && status === "optimal" && cov > minCov) warnings.push("the repair lost coverage against the model's optimum");
+  const raw = D + K * cov;
+  const why =
+    settings.fairnessFloor !== undefined ? "the compact baseline ignores the fairness floor"
+    : !Number.isFinite(D) ? "HiGHS gave no dual bound"
+    : cov > minCov ? `the award's coverage is not proven optimal (open credit ≥ ${Math.floor(minCov / (1 + P))} min is all that is proven${repaired ? ", and the repair cut lines" : ""})`
+    : raw < objective - 1e-6 - 1e-9 * K * cov ? "the MIP bound is below the award: the model was not a relaxation here"
+    : undefined;
+  if (why) warnings.push(`lpBound is NaN (not comparable): ${why}`);
+  const lpBound = why ? Number.NaN : Math.min(crew.reduce((t, c) => t + c.weight, 0), Math.max(objective, raw));
+  const gap = why ? Number.NaN : (lpBound - objective) / Math.max(1, Math.abs(lpBound));
   const stats: Stats = {
     times: { prepare: t1 - t0, "best-lines": t2 - t1, "compact-mip": t3 - t2, assemble: performance.now() - t3 },
     columns: 0,
@@ -257,11 +245,11 @@ export async function compactMipAward(instance: Instance, options: CompactMipOpt
       method: "compact-mip",
       openCreditMinutes: assembled.openCreditMinutes,
       openPositions: assembled.openPositions,
-      coverageLpBound,
+      coverageLpBound: Math.floor(minCov / (1 + P)),
       objective,
       lpBound,
       gap,
-      provenOptimal,
+      provenOptimal: status === "optimal" && gap <= 1e-7,
       illegalPairings: problem.illegal,
       fairnessShortfalls: [],
       best: Object.fromEntries(crew.map((c, i) => [c.crew.id, best[i]!])),
