@@ -2,7 +2,7 @@
  * The master problem in a persistent HiGHS model (maximisation throughout):
  *
  *     Σ_ℓ λ_iℓ = 1                        crew row i (one line each; a reserve line is a column too)
- *     Σ_iℓ a_pℓ λ_iℓ + u_p = d_p           cover row p (u_p open positions, 0 ≤ u_p ≤ d_p)
+ *     Σ_iℓ a_pℓ λ_iℓ + u_p = d_p           cover row p (u_p ≥ 0 open positions)
  *     min ≤ Σ_i λ_i,reserve ≤ max          reserve row, when the settings bound it
  *     Σ_p c_p u_p ≤ U*                     coverage row (phase 2)
  *     Σ_ℓ σ_iℓ λ_iℓ + f_i ≥ φ              fairness row i (phase 2 with a floor; f_i ≥ 0 penalised)
@@ -94,7 +94,28 @@ export class Master {
     });
     for (const [p, d] of need) {
       this.openCol.set(p, this.numCols);
-      this.addRawCol(0, 0, d, [this.coverRow.get(p)!], [1]);
+      // No upper bounds on u_p or λ: the rows imply u_p ≤ d_p and λ ≤ 1, and an
+      // explicit bound would let a column sit at it with its row's dual
+      // undetermined — degenerate duals that send pricing after lines that
+      // cannot help (measured: 50 rounds without progress on a published base).
+      this.addRawCol(0, 0, Infinity, [this.coverRow.get(p)!], [1]);
+    }
+    // Surplus s_p ≥ 0 (over-cover) with a penalty, in the LP only: it boxes the
+    // cover rows' duals (y_p ≤ penalty), which set partitioning otherwise
+    // leaves free to grow on covered trips (du Merle, Villeneuve, Desrosiers &
+    // Hansen 1999, in its simplest form). The LP stays a relaxation, so its
+    // bounds stay valid; the integer solves forbid surplus.
+    for (const p of need.keys()) this.surplusCol.set(p, this.addRawCol(0, 0, 0, [this.coverRow.get(p)!], [-1]));
+  }
+
+  readonly surplusCol = new Map<number, number>();
+
+  /** The LP's penalty per unit of surplus on each pairing (0 turns surplus off). */
+  setSurplusPenalty(penalty: (pairing: number) => number): void {
+    for (const [p, col] of this.surplusCol) {
+      const pen = penalty(p);
+      this.model.changeColCost(col, -pen);
+      this.model.changeColBounds(col, 0, pen > 0 ? Infinity : 0);
     }
   }
 
@@ -136,7 +157,7 @@ export class Master {
       indices.push(fair);
       values.push(fairness);
     }
-    this.colIndex.push(this.addRawCol(cost, 0, 1, indices, values));
+    this.colIndex.push(this.addRawCol(cost, 0, Infinity, indices, values));
     this.columns.push(column);
     return true;
   }
@@ -182,6 +203,8 @@ export class Master {
   }
 
   private run(timeLimit: number, stop: () => boolean): SolveOutcome {
+    // HiGHS measures time_limit on the model's own clock, which runs on across solves.
+    this.model.zeroAllClocks();
     this.model.options.set({ time_limit: Math.max(0.01, timeLimit) });
     const interrupt = (event: { interrupt(): void }) => {
       if (stop()) event.interrupt();
@@ -200,10 +223,11 @@ export class Master {
   }
 
   /** Solves the LP relaxation; duals follow from `duals()`. */
-  solveLp(timeLimit: number, stop: () => boolean): SolveOutcome {
+  solveLp(timeLimit: number, stop: () => boolean, infeasibleOk = false): SolveOutcome {
     this.model.clearIntegrality();
     this.model.options.set({ solver: "choose" });
     const outcome = this.run(timeLimit, stop);
+    if (infeasibleOk && outcome.status === "infeasible") return outcome;
     if (outcome.status === "infeasible" || outcome.status === "other") {
       throw new AppError("internal", `the master LP could not be solved (${outcome.status}, HiGHS model status ${this.model.getModelStatus()})`);
     }
@@ -230,8 +254,37 @@ export class Master {
     };
   }
 
+  private readonly pinned: number[] = [];
+
+  /** Pins master column k: 1 (the line is taken) or 0 (forbidden), until release(). */
+  pin(k: number, value: 0 | 1): void {
+    const col = this.colIndex[k]!;
+    this.model.changeColBounds(col, value, value === 1 ? Infinity : 0);
+    this.pinned.push(col);
+  }
+
+  /** Undoes every pin. */
+  release(): void {
+    for (const col of this.pinned.splice(0)) this.model.changeColBounds(col, 0, Infinity);
+  }
+
+  /** Turns the LP's surplus off (diving needs exact cover) or back on. */
+  surplusAllowed(on: boolean): void {
+    if (!on) {
+      this.savedSurplus = [...this.surplusCol.values()].map((col) => this.model.getCols({ kind: "set", indices: [col] }).upper[0]!);
+      for (const col of this.surplusCol.values()) this.model.changeColBounds(col, 0, 0);
+    } else if (this.savedSurplus) {
+      [...this.surplusCol.values()].forEach((col, k) => this.model.changeColBounds(col, 0, this.savedSurplus![k]!));
+      this.savedSurplus = undefined;
+    }
+  }
+
+  private savedSurplus: number[] | undefined;
+
   /** Solves with the line columns binary (price-and-branch on the columns so far). */
   solveMip(timeLimit: number, stop: () => boolean, gapTolerance: number, start?: readonly MasterColumn[]): SolveOutcome {
+    const surplusUpper = [...this.surplusCol.values()].map((col) => this.model.getCols({ kind: "set", indices: [col] }).upper[0]!);
+    for (const col of this.surplusCol.values()) this.model.changeColBounds(col, 0, 0);
     this.model.changeColsIntegrality({ kind: "set", indices: this.colIndex }, this.colIndex.map(() => 1 as const));
     if (start) {
       // A known integer solution (one column per crew member) as the MIP's first incumbent.
@@ -250,6 +303,7 @@ export class Master {
     const outcome = this.run(timeLimit, stop);
     const bound = Number(this.model.info.get("mip_dual_bound"));
     this.model.clearIntegrality();
+    [...this.surplusCol.values()].forEach((col, k) => this.model.changeColBounds(col, 0, surplusUpper[k]!));
     if (outcome.status === "infeasible" || outcome.status === "other") {
       throw new AppError("internal", `the master MIP could not be solved (${outcome.status})`);
     }

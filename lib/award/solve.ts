@@ -86,6 +86,8 @@ export interface AwardResult {
 const TOL = 1e-7;
 /** Wentges smoothing weight of the dual centre */
 const SMOOTHING = 0.5;
+/** LP penalty per unit of over-cover, in units of the pairing's own open-time cost (phase 1) */
+const SURPLUS = 2;
 /** per unit of satisfaction below the floor, in units of W (large against any W_i) */
 const FAIRNESS_PENALTY = 100;
 
@@ -161,14 +163,21 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
   }
   const master = new Master(highs, n, need, { min: reserveMin, max: reserveMax });
   try {
-    // Phase 2's objective coefficient of a column; phase 1 values every line 0.
+    // Phase 1 values a line at tieBreak × its phase-2 value: integer coverage
+    // values differ by at least δ = 1/(1 + positions) minutes (credit is whole
+    // minutes, δ per open position), and Σ_i W_i · tieBreak < δ/2, so the
+    // coverage optimum is unchanged while ties among equally covering awards go
+    // to wishes — which also breaks the symmetry of crew with equal networks.
+    const totalWeight = problem.crew.reduce((t, c) => t + c.weight, 0);
+    const tieBreak = 0.5 / (1 + totalPositions) / Math.max(1, totalWeight);
+    // Phase 2's objective coefficient of a column.
     const wishCoefficient = (col: Pick<MasterColumn, "crew" | "score" | "reserve">) =>
       col.reserve || best[col.crew]! <= 0 ? 0 : (problem.crew[col.crew]!.weight * col.score) / best[col.crew]!;
     const fairnessCoefficient = (col: Pick<MasterColumn, "crew" | "score" | "reserve">) =>
       col.reserve ? 0 : best[col.crew]! <= 0 ? 1 : col.score / best[col.crew]!;
     let phase: "coverage" | "wishes" = "coverage";
     const addColumn = (col: MasterColumn) =>
-      master.add(col, phase === "coverage" ? 0 : wishCoefficient(col), phase === "wishes" ? fairnessCoefficient(col) : 0);
+      master.add(col, phase === "coverage" ? tieBreak * wishCoefficient(col) : wishCoefficient(col), phase === "wishes" ? fairnessCoefficient(col) : 0);
 
     problem.crew.forEach((_, i) => addColumn({ crew: i, pairings: [], reserve: true, score: 0 }));
     problem.crew.forEach((c, i) => {
@@ -194,13 +203,19 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
      * none prices at the current duals (quick, then deep), which alone can end
      * the phase and which alone yields bounds.
      */
-    const generate = (from: number, to: number): { lp: SolveOutcome; bound: number; exhausted: boolean } => {
+    const generate = (
+      from: number,
+      to: number,
+      dive?: { fixed: ReadonlySet<number>; rounds: number },
+    ): { lp: SolveOutcome; bound: number; exhausted: boolean } => {
       let bound = Infinity;
       let centre: Float64Array | undefined;
       let mode: "smooth" | "plain" | "deep" = "plain";
       for (let round = 0; ; round++) {
-        const lp = clock.phase(`${phase}-lp`, () => master.solveLp(clock.remainingSeconds(share), stop));
-        const y = (lastDuals = master.duals());
+        const lp = clock.phase(`${phase}-lp`, () => master.solveLp(clock.remainingSeconds(share), stop, dive !== undefined));
+        if (dive && (lp.status !== "optimal" || round >= dive.rounds)) return { lp, bound, exhausted: false };
+        const y = master.duals();
+        if (!dive) lastDuals = y;
         if (lp.status !== "optimal") {
           noteStop();
           return { lp, bound, exhausted: false };
@@ -217,6 +232,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
               exhausted = false;
               break;
             }
+            if (dive?.fixed.has(i)) continue;
             const yi = y[master.crewRow[i]!]!;
             const request = { scoreWeight: scoreWeight(i, at), cost, threshold: at[master.crewRow[i]!]! + TOL, maxLines: linesPerRound, nodeLimit: quickNodes };
             let r = priceLines(problem, c, request);
@@ -232,12 +248,12 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
           }
         });
         rounds++;
-        if (mode !== "smooth" && Number.isFinite(lagrangian) && lagrangian < bound) {
+        if (!dive && mode !== "smooth" && Number.isFinite(lagrangian) && lagrangian < bound) {
           bound = lagrangian;
           centre = y;
         }
         const fraction = Math.min(1, round / 30);
-        progress(phase, from + (to - from) * fraction, `${phase === "coverage" ? "Covering the trips" : "Granting wishes"}: round ${rounds}, ${master.columns.length} lines, LP ${lp.objective.toFixed(3)}`);
+        if (!dive) progress(phase, from + (to - from) * fraction, `${phase === "coverage" ? "Covering the trips" : "Granting wishes"}: round ${rounds}, ${master.columns.length} lines, LP ${lp.objective.toFixed(3)}`);
         if (rounds >= roundLimit) {
           stoppedBy = "iteration-limit";
           return { lp, bound, exhausted: false };
@@ -262,14 +278,18 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       return cost;
     };
     const scoreWeight = (i: number, y: Float64Array) => {
-      if (phase === "coverage" || best[i]! <= 0) return 0;
+      if (best[i]! <= 0) return 0;
+      if (phase === "coverage") return (tieBreak * problem.crew[i]!.weight) / best[i]!;
       const fair = master.fairRow[i];
       const yf = fair === undefined ? 0 : y[fair]!;
       return (problem.crew[i]!.weight - yf) / best[i]!;
     };
 
     /** The integer solve, then closing the gap by enumerating every line within it; returns the chosen columns. */
-    const integer = (bound: number, exhausted: boolean, start: readonly MasterColumn[] | undefined) => {
+    const integer = (bound: number, exhausted: boolean, given: readonly MasterColumn[] | undefined) => {
+      // A dive from the LP often beats the solution we came with; the better one starts the MIP.
+      const dived = clock.phase(`${phase}-dive`, () => diveWithPricing(clock.remainingSeconds(share) / 2));
+      const start = dived && feasible(dived) && (!given || value(dived) > value(given) + 1e-9) ? dived : given;
       let mip = clock.phase(`${phase}-mip`, () => master.solveMip(clock.remainingSeconds(share), stop, 1e-9, start));
       let proven = false;
       if (mip.status !== "optimal") noteStop();
@@ -321,7 +341,56 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     };
     /** The phase's objective of a full solution (larger is better). */
     const value = (cols: readonly MasterColumn[]) =>
-      phase === "coverage" ? -coverageOf(cols) : cols.reduce((t, col) => t + wishCoefficient(col), 0);
+      phase === "coverage"
+        ? -coverageOf(cols) + tieBreak * cols.reduce((t, col) => t + wishCoefficient(col), 0)
+        : cols.reduce((t, col) => t + wishCoefficient(col), 0);
+    /**
+     * Diving with re-pricing for an integer solution: pin the lines the LP
+     * holds at 1 (or else its largest fractional line), let column generation
+     * answer for the crew not yet pinned, and repeat; a pin that leaves the LP
+     * infeasible is undone and that line forbidden. Exact cover while diving
+     * (no surplus). Undone at the end: only the lines generated stay.
+     */
+    const diveWithPricing = (seconds: number): MasterColumn[] | undefined => {
+      const deadline = performance.now() + seconds * 1000;
+      const fixed = new Set<number>();
+      master.surplusAllowed(false);
+      try {
+        for (let step = 0; step < 3 * n + 10; step++) {
+          if (stop() || performance.now() > deadline) return undefined;
+          const { lp } = generate(0, 0, { fixed, rounds: 4 });
+          if (lp.status !== "optimal") return undefined;
+          const x = master.values();
+          const open = master.columns.map((col, k) => ({ col, k, x: x[k]! })).filter((e) => !fixed.has(e.col.crew) && e.x > 1e-6);
+          if (open.length === 0) break;
+          const whole = open.filter((e) => e.x > 1 - 1e-6);
+          const pins = whole.length ? whole : [open.reduce((a, b) => (b.x > a.x + 1e-9 ? b : a))];
+          for (const e of pins) {
+            master.pin(e.k, 1);
+            fixed.add(e.col.crew);
+          }
+          if (whole.length === 0) {
+            const check = master.solveLp(clock.remainingSeconds(share), stop, true);
+            if (check.status === "infeasible") {
+              master.release(); // re-pin what stood, forbid the last choice
+              const keep = [...fixed].filter((crew) => crew !== pins[0]!.col.crew);
+              fixed.clear();
+              for (const col of master.columns.map((c, k) => ({ c, k })).filter(({ c, k }) => keep.includes(c.crew) && x[k]! > 1 - 1e-6)) {
+                master.pin(col.k, 1);
+                fixed.add(col.c.crew);
+              }
+              master.pin(pins[0]!.k, 0);
+            }
+          }
+        }
+        master.solveLp(clock.remainingSeconds(share), stop, true);
+        const chosen = chosenColumns();
+        return feasible(chosen) ? chosen : undefined;
+      } finally {
+        master.release();
+        master.surplusAllowed(true);
+      }
+    };
     const chosenColumns = () => {
       const x = master.values();
       return master.columns.filter((_, k) => x[k]! > 0.5);
@@ -329,6 +398,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
 
     // Phase 1: coverage.
     master.setCoverageObjective(openCost);
+    master.setSurplusPenalty((p) => SURPLUS * openCost.get(p)!);
     const cover = generate(10, 40);
     // A lower bound on open credit: −(phase 1's upper bound), less the tie-break share.
     const coverageLpBound = Number.isFinite(cover.bound) ? Math.max(0, -cover.bound - totalPositions / (1 + totalPositions)) : 0;
@@ -341,7 +411,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     // Phase 2: wishes with the coverage kept.
     phase = "wishes";
     const floor = settings.fairnessFloor;
-    coverageLimit = coverage + 1e-6 * Math.max(1, coverage);
+    coverageLimit = coverage + 1e-7; // HiGHS's primal feasibility tolerance; looser lets the LP bound drift
     master.setWishObjective(
       openCost,
       coverageLimit,
