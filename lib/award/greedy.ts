@@ -7,7 +7,8 @@
  */
 import type { Instance } from "../domain/index.ts";
 import { assembleAward, type Choice } from "./assemble.ts";
-import { prepareProblem, type AwardProblem } from "./problem.ts";
+import { extendAll, finish, start } from "../rules/index.ts";
+import { prepareProblem, scoreLine, type AwardProblem } from "./problem.ts";
 import { bestScores, priceLines } from "./pricing.ts";
 import type { AwardResult } from "./solve.ts";
 
@@ -58,4 +59,43 @@ export function greedyAward(instance: Instance, options: { nodeLimit?: number } 
       warnings: [],
     },
   };
+}
+
+/**
+ * A coverage-first start for phase 1 (a heuristic, not a baseline): trips in
+ * report order, each given to the crew member who can legally add it and holds
+ * the least credit so far (ties to seniority); lines the line-level rules refuse
+ * at the end (a credit minimum, say) become reserve. Set partitioning's LP is
+ * often far from integral, and this first fit is a good incumbent where the
+ * trips, not the crew, are scarce.
+ */
+export function firstFitChoices(problem: AwardProblem): (Choice & { score: number })[] {
+  const { ruleSet } = problem.instance;
+  const states = problem.crew.map((c) => start(c.crew, ruleSet, problem.engine));
+  const lines: number[][] = problem.crew.map(() => []);
+  const credit = problem.crew.map(() => 0);
+  const eligible = problem.crew.map((c) => new Set(c.eligible));
+  const order = problem.pairings.map((_, k) => k).sort((a, b) => problem.startMs[a]! - problem.startMs[b]! || a - b);
+  const reserveFrom = problem.crew.length - problem.instance.settings.reserve.min;
+  for (const k of order) {
+    for (let n = 0; n < problem.need[k]!; n++) {
+      const candidates = problem.crew
+        .map((_, i) => i)
+        .filter((i) => i < reserveFrom && eligible[i]!.has(k) && credit[i]! + problem.pairings[k]!.creditMinutes <= problem.maxCreditMinutes)
+        .sort((a, b) => credit[a]! - credit[b]! || a - b);
+      for (const i of candidates) {
+        if (lines[i]!.includes(k)) continue;
+        const r = extendAll(states[i]!, { kind: "pairing", pairing: problem.pairings[k]! });
+        if (r.violations.length) continue;
+        states[i] = r.state;
+        lines[i]!.push(k);
+        credit[i]! += problem.pairings[k]!.creditMinutes;
+        break;
+      }
+    }
+  }
+  return problem.crew.map((c, i) => {
+    if (lines[i]!.length === 0 || !finish(states[i]!).legal) return { reserve: true, pairings: [], score: 0 };
+    return { reserve: false, pairings: lines[i]!, score: scoreLine(problem, c, lines[i]!) };
+  });
 }

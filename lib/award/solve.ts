@@ -23,7 +23,7 @@
 import type { Instance, Stats } from "../domain/index.ts";
 import { AppError } from "../domain/index.ts";
 import { assembleAward, type Assembled, type Choice } from "./assemble.ts";
-import { greedyChoices } from "./greedy.ts";
+import { firstFitChoices, greedyChoices } from "./greedy.ts";
 import { loadHighs, Master, type MasterColumn, type SolveOutcome } from "./master.ts";
 import { prepareProblem, type AwardProblem } from "./problem.ts";
 import { bestScores, priceLines } from "./pricing.ts";
@@ -186,7 +186,11 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     });
     const greedyColumns = greedy.map((g, i): MasterColumn => ({ crew: i, pairings: g.pairings, reserve: g.reserve, score: g.score }));
     greedyColumns.forEach(addColumn);
-    const startColumns = greedyColumns;
+    const fitColumns = clock
+      .phase("first-fit", () => firstFitChoices(problem))
+      .map((g, i): MasterColumn => ({ crew: i, pairings: g.pairings, reserve: g.reserve, score: g.score }));
+    fitColumns.forEach(addColumn);
+
 
     let rounds = 0;
     let lastDuals: Float64Array = new Float64Array(0);
@@ -403,6 +407,8 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     // A lower bound on open credit: −(phase 1's upper bound), less the tie-break share.
     const coverageLpBound = Number.isFinite(cover.bound) ? Math.max(0, -cover.bound - totalPositions / (1 + totalPositions)) : 0;
     share = 0.4;
+    // Phase 1 starts from the better covering of the greedy award and the first fit.
+    const startColumns = feasible(fitColumns) && value(fitColumns) > value(greedyColumns) ? fitColumns : greedyColumns;
     const cover1 = integer(cover.lp.objective, cover.exhausted, startColumns);
     // Phase 1's integer optimum, counted from the lines chosen (Σ c_p u_p).
     const coverage = coverageOf(cover1.chosen);
