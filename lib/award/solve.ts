@@ -170,11 +170,12 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     // to wishes — which also breaks the symmetry of crew with equal networks.
     const totalWeight = problem.crew.reduce((t, c) => t + c.weight, 0);
     const tieBreak = 0.5 / (1 + totalPositions) / Math.max(1, totalWeight);
-    // Phase 2's objective coefficient of a column.
-    const wishCoefficient = (col: Pick<MasterColumn, "crew" | "score" | "reserve">) =>
-      col.reserve || best[col.crew]! <= 0 ? 0 : (problem.crew[col.crew]!.weight * col.score) / best[col.crew]!;
+    // Phase 2's objective coefficient of a column: W_i × satisfaction (clamped
+    // at 1, as satisfaction is, when the best line alone was not proven).
     const fairnessCoefficient = (col: Pick<MasterColumn, "crew" | "score" | "reserve">) =>
-      col.reserve ? 0 : best[col.crew]! <= 0 ? 1 : col.score / best[col.crew]!;
+      col.reserve ? 0 : best[col.crew]! <= 0 ? 1 : Math.min(1, col.score / best[col.crew]!);
+    const wishCoefficient = (col: Pick<MasterColumn, "crew" | "score" | "reserve">) =>
+      col.reserve || best[col.crew]! <= 0 ? 0 : problem.crew[col.crew]!.weight * fairnessCoefficient(col);
     let phase: "coverage" | "wishes" = "coverage";
     const addColumn = (col: MasterColumn) =>
       master.add(col, phase === "coverage" ? tieBreak * wishCoefficient(col) : wishCoefficient(col), phase === "wishes" ? fairnessCoefficient(col) : 0);
@@ -191,12 +192,10 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       .map((g, i): MasterColumn => ({ crew: i, pairings: g.pairings, reserve: g.reserve, score: g.score }));
     fitColumns.forEach(addColumn);
 
-
     let rounds = 0;
     let lastDuals: Float64Array = new Float64Array(0);
     let allExhausted = false;
 
-    /** Column generation to the LP optimum (or a limit); returns the LP objective and the Lagrangian bound. */
     /**
      * Column generation to the LP optimum (or a limit); returns the last LP, the
      * best Lagrangian bound and whether the last pricing was exhaustive.

@@ -40,7 +40,10 @@ export const minutesSchema = z.number().int("minutes must be whole").min(0, "min
 
 /**
  * For cross-field checks that read instants and dates: run only when every
- * field parsed, so a bad field is reported at its path instead of making the
- * check itself throw.
+ * field parsed (issues so far are other cross-field checks' own, code
+ * "custom"), so a bad field is reported at its path instead of making the
+ * check itself throw, and cross-field findings still add up.
  */
-export const whenFieldsValid = { when: (payload: { issues: readonly unknown[] }) => payload.issues.length === 0 };
+export const whenFieldsValid = {
+  when: (payload: { issues: readonly { code?: string }[] }) => payload.issues.every((issue) => issue.code === "custom"),
+};
