@@ -403,8 +403,9 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     master.setCoverageObjective(openCost);
     master.setSurplusPenalty((p) => SURPLUS * openCost.get(p)!);
     const cover = generate(10, 40);
-    // A lower bound on open credit: −(phase 1's upper bound), less the tie-break share.
-    const coverageLpBound = Number.isFinite(cover.bound) ? Math.max(0, -cover.bound - totalPositions / (1 + totalPositions)) : 0;
+    // A lower bound on open credit: −(phase 1's upper bound), less the positions' share δ·P and
+    // the wishes' tie-break (below δ/2).
+    const coverageLpBound = Number.isFinite(cover.bound) ? Math.max(0, -cover.bound - (totalPositions + 0.5) / (1 + totalPositions)) : 0;
     share = 0.4;
     // Phase 1 starts from the better covering of the greedy award and the first fit.
     const startColumns = feasible(fitColumns) && value(fitColumns) > value(greedyColumns) ? fitColumns : greedyColumns;
