@@ -306,6 +306,10 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
           let added = 0;
           clock.phase(`${phase}-closing`, () => {
             for (const [i, c] of problem.crew.entries()) {
+              if (stop()) {
+                complete = false;
+                break;
+              }
               const yi = y[master.crewRow[i]!]!;
               const cap = options.closingLines ?? 400;
               const r = priceLines(problem, c, { scoreWeight: scoreWeight(i, y), cost, threshold: yi - gapAbs - TOL, maxLines: cap, nodeLimit: nodeLimit * 5 });
