@@ -9,19 +9,19 @@ import type { Instance } from "../domain/index.ts";
 import { assembleAward, type Choice } from "./assemble.ts";
 import { extendAll, finish, start } from "../rules/index.ts";
 import { prepareProblem, scoreLine, type AwardProblem } from "./problem.ts";
-import { bestScores, priceLines } from "./pricing.ts";
+import { bestScores, HURRIED_NODES, priceLines } from "./pricing.ts";
 import type { AwardResult } from "./solve.ts";
 
 /** A tie-break per credit minute, far below the smallest wish weight that matters (0.8^49 ≈ 2e-5). */
 const CREDIT_TIE = 1e-9;
 
-export function greedyChoices(problem: AwardProblem, nodeLimit: number): (Choice & { score: number })[] {
+export function greedyChoices(problem: AwardProblem, nodeLimit: number, hurry: () => boolean = () => false): (Choice & { score: number })[] {
   const left = [...problem.need];
   const cost = Float64Array.from(problem.pairings, (p) => -CREDIT_TIE * p.creditMinutes);
   const reserveFrom = problem.crew.length - problem.instance.settings.reserve.min;
   return problem.crew.map((c, i) => {
     if (i >= reserveFrom) return { reserve: true, pairings: [], score: 0 };
-    const r = priceLines(problem, c, { scoreWeight: 1, cost, threshold: -Infinity, maxLines: 1, nodeLimit, allowed: (k) => left[k]! > 0 });
+    const r = priceLines(problem, c, { scoreWeight: 1, cost, threshold: -Infinity, maxLines: 1, nodeLimit: hurry() ? HURRIED_NODES : nodeLimit, allowed: (k) => left[k]! > 0 });
     const line = r.lines[0];
     if (!line) return { reserve: true, pairings: [], score: 0 };
     for (const k of line.pairings) left[k]!--;

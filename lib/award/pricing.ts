@@ -360,13 +360,20 @@ function compareLines(a: readonly number[], b: readonly number[]): number {
 }
 
 /** The best line-holder score of each crew member alone (0 when none is legal), and whether each search was exhaustive. */
-export function bestScores(problem: AwardProblem, nodeLimit: number): { best: number[]; exhausted: boolean[]; lines: (number[] | undefined)[] } {
+/** Searches of this many nodes stand in for the full ones once the caller's time is up. */
+export const HURRIED_NODES = 200;
+
+export function bestScores(
+  problem: AwardProblem,
+  nodeLimit: number,
+  hurry: () => boolean = () => false,
+): { best: number[]; exhausted: boolean[]; lines: (number[] | undefined)[] } {
   const zero = new Float64Array(problem.pairings.length);
   const best: number[] = [];
   const exhausted: boolean[] = [];
   const lines: (number[] | undefined)[] = [];
   for (const c of problem.crew) {
-    const r = priceLines(problem, c, { scoreWeight: 1, cost: zero, threshold: 0, maxLines: 1, nodeLimit });
+    const r = priceLines(problem, c, { scoreWeight: 1, cost: zero, threshold: 0, maxLines: 1, nodeLimit: hurry() ? HURRIED_NODES : nodeLimit });
     best.push(r.lines[0]?.score ?? 0);
     lines.push(r.lines[0]?.pairings);
     exhausted.push(r.exhausted);
