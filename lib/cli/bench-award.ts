@@ -60,10 +60,10 @@ for (const instance of instances) {
       rows.push(row);
       process.stderr.write(`${row.seconds!.toFixed(1)} s\n`);
     } catch (e) {
-      const failed = e as { killed?: boolean; stderr?: string; message?: string };
+      const failed = e as { killed?: boolean; code?: string; stderr?: string; message?: string };
       // The child's own last words say why; the spawn error only says that it failed.
       const why = (failed.stderr ?? "").split("\n").filter((l) => /Error|error:/.test(l)).at(-1)?.trim();
-      const message = failed.killed ? `killed after ${Number(seconds) * 2 + 120} s` : (why ?? String(failed.message).split("\n")[0]!);
+      const message = failed.killed || failed.code === "ETIMEDOUT" ? `killed after ${Number(seconds) * 2 + 120} s` : (why ?? String(failed.message).split("\n")[0]!);
       rows.push({ instance, method, error: message });
       process.stderr.write(`failed: ${message}\n`);
     }
