@@ -271,6 +271,7 @@ export class Master {
   /** Turns the LP's surplus off (diving needs exact cover) or back on. */
   surplusAllowed(on: boolean): void {
     if (!on) {
+      if (this.savedSurplus) return; // already off
       this.savedSurplus = [...this.surplusCol.values()].map((col) => this.model.getCols({ kind: "set", indices: [col] }).upper[0]!);
       for (const col of this.surplusCol.values()) this.model.changeColBounds(col, 0, 0);
     } else if (this.savedSurplus) {
@@ -283,8 +284,7 @@ export class Master {
 
   /** Solves with the line columns binary (price-and-branch on the columns so far). */
   solveMip(timeLimit: number, stop: () => boolean, gapTolerance: number, start?: readonly MasterColumn[]): SolveOutcome {
-    const surplusUpper = [...this.surplusCol.values()].map((col) => this.model.getCols({ kind: "set", indices: [col] }).upper[0]!);
-    for (const col of this.surplusCol.values()) this.model.changeColBounds(col, 0, 0);
+    this.surplusAllowed(false);
     this.model.changeColsIntegrality({ kind: "set", indices: this.colIndex }, this.colIndex.map(() => 1 as const));
     if (start) {
       // A known integer solution (one column per crew member) as the MIP's first incumbent.
@@ -303,7 +303,7 @@ export class Master {
     const outcome = this.run(timeLimit, stop);
     const bound = Number(this.model.info.get("mip_dual_bound"));
     this.model.clearIntegrality();
-    [...this.surplusCol.values()].forEach((col, k) => this.model.changeColBounds(col, 0, surplusUpper[k]!));
+    this.surplusAllowed(true);
     if (outcome.status === "infeasible" || outcome.status === "other") {
       throw new AppError("internal", `the master MIP could not be solved (${outcome.status})`);
     }

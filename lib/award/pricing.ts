@@ -26,11 +26,10 @@
  * scoreWeight × an optimistic score (wish by wish: what the trips still
  * ahead could at most make of it; see wishBound).
  */
-import type { Pairing, Wish } from "../domain/index.ts";
+import type { Wish } from "../domain/index.ts";
 import { matchesTripSelection, periodWeekends, rankWeight } from "../domain/index.ts";
 import { daysBetween } from "../domain/time.ts";
-import { extendAll, finish, type LineState } from "../rules/index.ts";
-import { start } from "../rules/index.ts";
+import { extendAll, finish, start, type LineState } from "../rules/index.ts";
 import { scoreLine, type AwardProblem, type CrewProblem } from "./problem.ts";
 
 export interface PriceRequest {
@@ -257,7 +256,6 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   };
 
   const path: number[] = [];
-  const line: Pairing[] = [];
   const dayCount = new Uint16Array(problem.periodLength);
   let worked = 0;
   let credit = 0;
@@ -324,7 +322,6 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
       if (gainSum + gain[j]! + ahead(after[j]!, j + 1, credit + p.creditMinutes, worked + newDays) + scoreWeight * optimistic <= floor) continue;
       // push
       path.push(j);
-      line.push(p);
       for (const d of days) dayCount[d]!++;
       worked += newDays;
       credit += p.creditMinutes;
@@ -336,7 +333,6 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
       credit -= p.creditMinutes;
       worked -= newDays;
       for (const d of days) dayCount[d]!--;
-      line.pop();
       path.pop();
       states.length = path.length + 1;
       if (dead <= path.length) return dead;

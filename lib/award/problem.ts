@@ -8,8 +8,7 @@ import type { CrewMember, Instance, Pairing, Wish } from "../domain/index.ts";
 import { lineScore, type ScoreContext } from "../domain/index.ts";
 import { pairingDates } from "../domain/pairing-facts.ts";
 import { daysBetween, instantMs } from "../domain/time.ts";
-import { canFollow, checkLine, dutyRulesOnly, extendAll, start, type EngineContext, type LineResult } from "../rules/index.ts";
-import { requiredDaysOff } from "../rules/index.ts";
+import { canFollow, checkLine, dutyRulesOnly, extendAll, requiredDaysOff, start, type EngineContext, type LineResult } from "../rules/index.ts";
 
 export interface CrewProblem {
   crew: CrewMember;

@@ -332,18 +332,18 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       warnings.push(`the ${phase} integer solve stopped without improving on its starting solution`);
       return { mip, proven: false, chosen: fallback };
     };
-    const coverageOf = (cols: readonly MasterColumn[]) => {
+    /** Positions each pairing still needs under a full solution (negative: over-covered). */
+    const openAfter = (cols: readonly MasterColumn[]) => {
       const left = new Map(need);
       for (const col of cols) for (const p of col.pairings) left.set(p, left.get(p)! - 1);
-      return [...left].reduce((t, [p, open]) => t + openCost.get(p)! * open, 0);
+      return left;
     };
+    const coverageOf = (cols: readonly MasterColumn[]) => [...openAfter(cols)].reduce((t, [p, open]) => t + openCost.get(p)! * open, 0);
     let coverageLimit = Infinity;
     /** One line per crew member, no trip over-covered, reserve within bounds, coverage kept. */
     const feasible = (cols: readonly MasterColumn[]) => {
       if (cols.length !== n || new Set(cols.map((col) => col.crew)).size !== n) return false;
-      const left = new Map(need);
-      for (const col of cols) for (const p of col.pairings) left.set(p, left.get(p)! - 1);
-      if ([...left.values()].some((open) => open < 0)) return false;
+      if ([...openAfter(cols).values()].some((open) => open < 0)) return false;
       const reserves = cols.filter((col) => col.reserve).length;
       return reserves >= reserveMin && reserves <= reserveMax && coverageOf(cols) <= coverageLimit;
     };
