@@ -225,12 +225,22 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
     const k = eligible[j]!;
     const g = usable[j] ? Math.max(0, gain[j]!) : 0;
     perCredit[j] = Math.max(perCredit[j + 1]!, g / Math.max(1, problem.pairings[k]!.creditMinutes));
-    perDay[j] = Math.max(perDay[j + 1]!, g / Math.max(1, problem.periodDays[k]!.length));
+    perDay[j] = Math.max(perDay[j + 1]!, g / Math.max(1, problem.dutyDays[k]!.length));
   }
   const ahead = (chain: number, from: number, creditUsed: number, daysUsed: number) =>
     Math.min(chain, (problem.maxCreditMinutes - creditUsed) * perCredit[from]!, (c.maxWorkedDays - daysUsed) * perDay[from]!);
   let rootChain = 0;
   for (let j = 0; j < m; j++) if (usable[j] && gain[j]! + after[j]! > rootChain) rootChain = gain[j]! + after[j]!;
+  // reach[j]: the most credit a chain after position j can add (below the credit maximum a line must reach its minimum).
+  const minCredit = problem.minCreditMinutes;
+  const reach = new Float64Array(m);
+  if (minCredit > 0) {
+    for (let j = m - 1; j >= 0; j--) {
+      let most = 0;
+      for (const s of successors[j]!) if (usable[s]) most = Math.max(most, problem.pairings[eligible[s]!]!.creditMinutes + reach[s]!);
+      reach[j] = most;
+    }
+  }
   // Children are tried best first: the chain value of the duals, plus what the
   // trip alone does to the crew member's score (a guide for the order only).
   const alone = request.scoreWeight > 0 ? scoreAlone(problem, c) : undefined;
@@ -256,7 +266,21 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   };
 
   const path: number[] = [];
+  // Period days the path occupies (for wishes) and works on duty (for the days-off and days-on rules).
   const dayCount = new Uint16Array(problem.periodLength);
+  const dutyCount = new Uint16Array(problem.periodLength);
+  /** The longest run of duty days through `days` (a trip's) were they added: a run only lengthens as trips are added. */
+  const runWith = (days: readonly number[]) => {
+    let longest = 0;
+    for (const d of days) {
+      let lo = d;
+      let hi = d;
+      while (lo > 0 && (dutyCount[lo - 1]! > 0 || days.includes(lo - 1))) lo--;
+      while (hi < dutyCount.length - 1 && (dutyCount[hi + 1]! > 0 || days.includes(hi + 1))) hi++;
+      longest = Math.max(longest, hi - lo + 1);
+    }
+    return longest;
+  };
   let worked = 0;
   let credit = 0;
   let gainSum = 0;
@@ -316,13 +340,17 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
       const p = pairings[k]!;
       if (credit + p.creditMinutes > problem.maxCreditMinutes) continue;
       const days = problem.periodDays[k]!;
+      const onDuty = problem.dutyDays[k]!;
       let newDays = 0;
-      for (const d of days) if (dayCount[d] === 0) newDays++;
+      for (const d of onDuty) if (dutyCount[d] === 0) newDays++;
       if (worked + newDays > c.maxWorkedDays) continue;
+      if (credit + p.creditMinutes + reach[j]! < minCredit) continue;
+      if (onDuty.length > 0 && runWith(onDuty) > problem.maxDaysOn) continue;
       if (gainSum + gain[j]! + ahead(after[j]!, j + 1, credit + p.creditMinutes, worked + newDays) + scoreWeight * optimistic <= floor) continue;
       // push
       path.push(j);
       for (const d of days) dayCount[d]!++;
+      for (const d of onDuty) dutyCount[d]!++;
       worked += newDays;
       credit += p.creditMinutes;
       gainSum += gain[j]!;
@@ -332,6 +360,7 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
       gainSum -= gain[j]!;
       credit -= p.creditMinutes;
       worked -= newDays;
+      for (const d of onDuty) dutyCount[d]!--;
       for (const d of days) dayCount[d]!--;
       path.pop();
       states.length = path.length + 1;

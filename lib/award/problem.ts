@@ -7,7 +7,7 @@
 import type { CrewMember, Instance, Pairing, Wish } from "../domain/index.ts";
 import { lineScore, type ScoreContext } from "../domain/index.ts";
 import { pairingDates } from "../domain/pairing-facts.ts";
-import { daysBetween, instantMs } from "../domain/time.ts";
+import { daysBetween, instantMs, localDatesTouched } from "../domain/time.ts";
 import { canFollow, checkLine, dutyRulesOnly, extendAll, requiredDaysOff, start, type EngineContext, type LineResult } from "../rules/index.ts";
 
 export interface CrewProblem {
@@ -40,6 +40,11 @@ export interface AwardProblem {
   endMs: number[];
   /** per pairing: its base-local dates inside the period, as day numbers from the period's start */
   periodDays: number[][];
+  /**
+   * per pairing: the period days its duties touch (report to release) — what the
+   * days-off and days-on rules count; a layover day with no duty is not among them
+   */
+  dutyDays: number[][];
   engine: EngineContext;
   score: ScoreContext;
   /** seniority order */
@@ -47,6 +52,8 @@ export interface AwardProblem {
   illegal: IllegalPairing[];
   /** the credit window's maximum, Infinity without one */
   maxCreditMinutes: number;
+  /** the longest run of worked days the days-on rule allows, Infinity without one */
+  maxDaysOn: number;
   /** the credit window's minimum for a line-holder line, 0 without one */
   minCreditMinutes: number;
   periodLength: number;
@@ -72,11 +79,10 @@ export function prepareProblem(instance: Instance): AwardProblem {
   const startMs = pairings.map((p) => instantMs(p.dutyPeriods[0]!.report));
   const endMs = pairings.map((p) => instantMs(p.dutyPeriods.at(-1)!.release));
   const periodLength = daysBetween(period.startDate, period.endDate) + 1;
-  const periodDays = pairings.map((p) =>
-    pairingDates(p, period.zone)
-      .map((date) => daysBetween(period.startDate, date))
-      .filter((d) => d >= 0 && d < periodLength),
-  );
+  const dayNumbers = (dates: Iterable<string>) =>
+    [...new Set(dates)].map((date) => daysBetween(period.startDate, date)).filter((d) => d >= 0 && d < periodLength).sort((a, b) => a - b);
+  const periodDays = pairings.map((p) => dayNumbers(pairingDates(p, period.zone)));
+  const dutyDays = pairings.map((p) => dayNumbers(p.dutyPeriods.flatMap((d) => localDatesTouched(d.report, d.release, period.zone))));
 
   // A pairing that breaks a duty or rest rule by itself, for a crew member
   // with no history, is illegal for everyone: reported and left open.
@@ -101,6 +107,8 @@ export function prepareProblem(instance: Instance): AwardProblem {
   const maxCreditMinutes = typeof maxCredit === "number" ? maxCredit : Infinity;
   const minCredit = creditRule?.params.minMinutes;
   const minCreditMinutes = typeof minCredit === "number" ? minCredit : 0;
+  const daysOnRule = ruleSet.rules.find((r) => (r.params.check ?? r.id) === "max-days-on");
+  const maxDaysOn = typeof daysOnRule?.params.days === "number" ? daysOnRule.params.days : Infinity;
   const hasDaysOff = ruleSet.rules.some((r) => (r.params.check ?? r.id) === "min-days-off");
   const maxWorkedDays = hasDaysOff ? periodLength - requiredDaysOff(ruleSet.rules, periodLength, false) : Infinity;
 
@@ -149,7 +157,7 @@ export function prepareProblem(instance: Instance): AwardProblem {
       maxWorkedDays,
     };
   });
-  return { instance, pairings, need, startMs, endMs, periodDays, engine, score, crew, illegal, maxCreditMinutes, minCreditMinutes, periodLength };
+  return { instance, pairings, need, startMs, endMs, periodDays, dutyDays, engine, score, crew, illegal, maxCreditMinutes, maxDaysOn, minCreditMinutes, periodLength };
 }
 
 /** The score of a line-holder line of pairing indices for crew member `c` (lineScore, the one contract). */
