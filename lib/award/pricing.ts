@@ -30,7 +30,7 @@ import type { Wish } from "../domain/index.ts";
 import { matchesTripSelection, periodWeekends, rankWeight } from "../domain/index.ts";
 import { daysBetween } from "../domain/time.ts";
 import { extendAll, finish, start, type LineState } from "../rules/index.ts";
-import { scoreLine, type AwardProblem, type CrewProblem } from "./problem.ts";
+import { scoreLine, successorPositions, type AwardProblem, type CrewProblem } from "./problem.ts";
 
 export interface PriceRequest {
   /** weight of the line's score in its value (0: legality and costs only) */
@@ -206,7 +206,8 @@ function scoreAlone(problem: AwardProblem, c: CrewProblem): Float64Array {
 
 /** The best legal lines of one crew member under `request`. */
 export function priceLines(problem: AwardProblem, c: CrewProblem, request: PriceRequest): PriceResult {
-  const { eligible, successors } = c;
+  const { eligible, position } = c;
+  const next = problem.next;
   const m = eligible.length;
   const allowed = request.allowed;
   const usable = Uint8Array.from(eligible, (k) => (allowed && !allowed(k) ? 0 : 1));
@@ -215,7 +216,10 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   const after = new Float64Array(m);
   for (let j = m - 1; j >= 0; j--) {
     let best = 0;
-    for (const s of successors[j]!) if (usable[s] && gain[s]! + after[s]! > best) best = gain[s]! + after[s]!;
+    for (const b of next[eligible[j]!]!) {
+      const s = position[b]!;
+      if (s >= 0 && usable[s] && gain[s]! + after[s]! > best) best = gain[s]! + after[s]!;
+    }
     after[j] = best;
   }
   // Best gain per credit minute and per period day at positions ≥ j (positive gains only).
@@ -237,7 +241,10 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   if (minCredit > 0) {
     for (let j = m - 1; j >= 0; j--) {
       let most = 0;
-      for (const s of successors[j]!) if (usable[s]) most = Math.max(most, problem.pairings[eligible[s]!]!.creditMinutes + reach[s]!);
+      for (const b of next[eligible[j]!]!) {
+        const s = position[b]!;
+        if (s >= 0 && usable[s]) most = Math.max(most, problem.pairings[b]!.creditMinutes + reach[s]!);
+      }
       reach[j] = most;
     }
   }
@@ -250,7 +257,7 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   const childrenOf = new Map<number, number[]>();
   const children = (j: number) => {
     let known = childrenOf.get(j);
-    if (!known) childrenOf.set(j, (known = order(successors[j]!)));
+    if (!known) childrenOf.set(j, (known = order(successorPositions(problem, c, j))));
     return known;
   };
 
