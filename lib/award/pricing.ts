@@ -212,9 +212,12 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   const allowed = request.allowed;
   const usable = Uint8Array.from(eligible, (k) => (allowed && !allowed(k) ? 0 : 1));
   const gain = Float64Array.from(eligible, (k) => -request.cost[k]!);
+  // The usable positions, last first (a pool of a few trips makes the whole search small).
+  const backwards: number[] = [];
+  for (let j = m - 1; j >= 0; j--) if (usable[j]) backwards.push(j);
   // after[j]: the best Σ gain of a chain that follows position j (0: stop there).
   const after = new Float64Array(m);
-  for (let j = m - 1; j >= 0; j--) {
+  for (const j of backwards) {
     let best = 0;
     for (const b of next[eligible[j]!]!) {
       const s = position[b]!;
@@ -234,12 +237,12 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   const ahead = (chain: number, from: number, creditUsed: number, daysUsed: number) =>
     Math.min(chain, (problem.maxCreditMinutes - creditUsed) * perCredit[from]!, (c.maxWorkedDays - daysUsed) * perDay[from]!);
   let rootChain = 0;
-  for (let j = 0; j < m; j++) if (usable[j] && gain[j]! + after[j]! > rootChain) rootChain = gain[j]! + after[j]!;
+  for (const j of backwards) if (gain[j]! + after[j]! > rootChain) rootChain = gain[j]! + after[j]!;
   // reach[j]: the most credit a chain after position j can add (below the credit maximum a line must reach its minimum).
   const minCredit = problem.minCreditMinutes;
   const reach = new Float64Array(m);
   if (minCredit > 0) {
-    for (let j = m - 1; j >= 0; j--) {
+    for (const j of backwards) {
       let most = 0;
       for (const b of next[eligible[j]!]!) {
         const s = position[b]!;
@@ -253,7 +256,7 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   const alone = request.scoreWeight > 0 ? scoreAlone(problem, c) : undefined;
   const key = Float64Array.from(eligible, (_, j) => gain[j]! + after[j]! + (alone ? request.scoreWeight * alone[j]! : 0));
   const order = (js: readonly number[]) => js.filter((j) => usable[j]).sort((a, b) => key[b]! - key[a]! || a - b);
-  const rootChildren = order(eligible.map((_, j) => j));
+  const rootChildren = order(backwards);
   const childrenOf = new Map<number, number[]>();
   const children = (j: number) => {
     let known = childrenOf.get(j);
