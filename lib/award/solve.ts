@@ -96,8 +96,14 @@ const FAIRNESS_PENALTY = 100;
 
 class Clock {
   readonly times: Record<string, number> = {};
-  private readonly t0 = performance.now();
-  constructor(private readonly limitMs: number) {}
+  private t0 = performance.now();
+  constructor(private limitMs: number) {}
+  /** From now on, shares are of the time left (what preparing took is not shared out again). */
+  rebase(): void {
+    const now = performance.now();
+    this.limitMs = Math.max(0, this.limitMs - (now - this.t0));
+    this.t0 = now;
+  }
   phase<T>(name: string, run: () => T): T {
     const start = performance.now();
     try {
@@ -127,12 +133,12 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
   const roundLimit = settings.iterationLimit ?? Infinity;
   const warnings: string[] = [];
   const cancelled = () => options.shouldStop?.() === true;
-  // Shares of the time limit: column generation for coverage until 15 %, its
-  // integer solve until 20 %, covering by neighbourhoods until 40 %; for wishes
-  // until 50 %, the final integer solve until 55 %, improving it by
-  // neighbourhoods the rest. (Measured on generated L: a pricing round of
-  // column generation takes seconds there, while neighbourhoods cover and
-  // improve the most per second.)
+  // Shares of the time left once the first solutions stand (clock.rebase):
+  // column generation for coverage until 15 %, its integer solve until 20 %,
+  // covering by neighbourhoods until 40 %; for wishes until 50 %, the final
+  // integer solve until 55 %, improving it by neighbourhoods the rest.
+  // (Measured on generated L: a pricing round of column generation takes
+  // seconds there, while neighbourhoods cover and improve the most per second.)
   let share = 0.15;
   const stop = () => cancelled() || clock.expired(share);
   const progress = (phase: AwardPhase, percent: number, message: string) => options.onProgress?.({ phase, percent, message });
@@ -154,6 +160,8 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
   }
   const greedy = clock.phase("greedy", () => greedyChoices(problem, nodeLimit / 4, () => clock.expired(0.15)));
   if (cancelled()) throw new AppError("conflict", "the award run was cancelled");
+  // The shares below are of the time left once the first solutions stand.
+  clock.rebase();
 
   const highs = await loadHighs();
   const need = new Map<number, number>();
