@@ -36,7 +36,7 @@ import { assembleAward, type Choice } from "./assemble.ts";
 import { greedyChoices } from "./greedy.ts";
 import { loadHighs } from "./master.ts";
 import { checkCrewLine, prepareProblem, successorPositions } from "./problem.ts";
-import { bestScores } from "./pricing.ts";
+import { BEST_LINE_NODES, bestScores } from "./pricing.ts";
 import type { AwardResult } from "./solve.ts";
 
 export interface CompactMipOptions {
@@ -80,7 +80,7 @@ export async function compactMipAward(instance: Instance, options: CompactMipOpt
   const limitSeconds = options.timeLimitSeconds ?? settings.timeLimitSeconds;
   const problem = prepareProblem(instance);
   const t1 = performance.now();
-  const alone = bestScores(problem, 100_000);
+  const alone = bestScores(problem, BEST_LINE_NODES);
   const best = alone.best;
   const t2 = performance.now();
   const { pairings, need, crew } = problem;

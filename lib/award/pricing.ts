@@ -398,6 +398,9 @@ function compareLines(a: readonly number[], b: readonly number[]): number {
 /** Searches of this many nodes stand in for the full ones once the caller's time is up. */
 export const HURRIED_NODES = 200;
 
+/** Search nodes for each crew member's best line alone, the same for every method so satisfactions compare. */
+export const BEST_LINE_NODES = 40_000;
+
 export function bestScores(
   problem: AwardProblem,
   nodeLimit: number,

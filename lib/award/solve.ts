@@ -26,7 +26,7 @@ import { assembleAward, type Assembled, type Choice } from "./assemble.ts";
 import { firstFitChoices, greedyChoices } from "./greedy.ts";
 import { loadHighs, Master, type MasterColumn, type SolveOutcome } from "./master.ts";
 import { prepareProblem, type AwardProblem } from "./problem.ts";
-import { bestScores, priceLines } from "./pricing.ts";
+import { BEST_LINE_NODES, bestScores, priceLines } from "./pricing.ts";
 import { improveByNeighbourhoods } from "./improve.ts";
 
 export type AwardPhase = "prepare" | "coverage" | "wishes" | "integer" | "done";
@@ -153,7 +153,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
   const n = problem.crew.length;
   progress("prepare", 5, "Finding each crew member's best line alone");
   // Best lines alone and the greedy award may take up to 10 % and 15 % of the time; then they hurry.
-  const alone = clock.phase("best-lines", () => bestScores(problem, nodeLimit * 2, () => clock.expired(0.1)));
+  const alone = clock.phase("best-lines", () => bestScores(problem, BEST_LINE_NODES, () => clock.expired(0.1)));
   const best = alone.best;
   if (alone.exhausted.some((e) => !e)) {
     warnings.push(`best line alone not proven for ${alone.exhausted.filter((e) => !e).length} crew (search limit); satisfaction is measured against the best line found`);
