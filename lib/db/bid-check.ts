@@ -40,6 +40,14 @@ export async function checkWishes(scope: BidScope, wishes: unknown): Promise<Wis
       });
     });
   }
+  list.forEach((w, rank) => {
+    if (w.kind !== "free-days") return;
+    w.dates.forEach((date, k) => {
+      if (date < scope.period.startDate || date > scope.period.endDate) {
+        issues.push({ path: [rank, "dates", k], message: `${date} is not a day of ${scope.period.name}` });
+      }
+    });
+  });
   for (const [rank, w] of list.entries()) {
     if (w.kind !== "buddy") continue;
     const buddy = await db().crewMember.findFirst({

@@ -20,6 +20,13 @@ export interface TripSummary {
   legs: number;
   deadheads: number;
   redEye: boolean;
+  /** base-local dates touched, first report to last release */
+  dates: string[];
+  /** ISO days of the week touched, 1 = Monday */
+  daysOfWeek: number[];
+  dutyPeriods: number;
+  creditPerDutyDayMinutes: number;
+  tafbMinutes: number;
 }
 
 export interface OpenPeriodView {
@@ -78,6 +85,11 @@ export async function openPeriodForCrew(user: SessionUser): Promise<OpenPeriodVi
         legs: legs.length,
         deadheads: legs.filter((l) => l.deadhead).length,
         redEye: facts.redEye,
+        dates: [...facts.dates],
+        daysOfWeek: [...facts.daysOfWeek].sort(),
+        dutyPeriods: p.dutyPeriods.length,
+        creditPerDutyDayMinutes: Math.round(facts.creditPerDutyDay),
+        tafbMinutes: p.tafbMinutes,
       };
     });
   return {

@@ -1,0 +1,179 @@
+"use client";
+
+import Link from "next/link";
+import { useMemo, useState } from "react";
+import type { TripSummary } from "@/lib/db/periods";
+import { hhmm, shortDate } from "@/app/ui/format";
+import { activeFilters, emptyFilter, filterTrips, type ListFilter, type SortKey } from "./trip-list-filter";
+
+const WEEKDAYS = ["Mon", "Tue", "Wed", "Thu", "Fri", "Sat", "Sun"];
+const field = "mt-1 block w-full rounded-md border border-slate-400 bg-white px-3 py-2.5 text-base";
+const chip = (on: boolean) =>
+  `min-h-11 min-w-11 rounded-md border px-3 text-base font-medium ${on ? "border-sky-800 bg-sky-800 text-white" : "border-slate-400 bg-white text-slate-900"}`;
+
+/** The period's trips with search, filters and sort, all on the phone. */
+export function TripBrowser({ trips }: { trips: TripSummary[] }) {
+  const [filter, setFilter] = useState<ListFilter>(emptyFilter);
+  const [sort, setSort] = useState<SortKey>("date");
+  const shown = useMemo(() => filterTrips(trips, filter, sort), [trips, filter, sort]);
+  const stations = useMemo(() => [...new Set(trips.flatMap((t) => t.layovers))].sort(), [trips]);
+  const set = <K extends keyof ListFilter>(key: K, value: ListFilter[K]) => setFilter((f) => ({ ...f, [key]: value }));
+  const toggle = (key: "lengths" | "daysOfWeek", n: number) =>
+    setFilter((f) => ({ ...f, [key]: f[key].includes(n) ? f[key].filter((x) => x !== n) : [...f[key], n] }));
+  const active = activeFilters(filter);
+
+  return (
+    <div className="mt-4">
+      <div className="flex gap-2">
+        <label className="flex-1">
+          <span className="sr-only">Search by trip number or station</span>
+          <input
+            type="search"
+            value={filter.q}
+            onChange={(e) => set("q", e.target.value)}
+            placeholder="Trip number or station"
+            className={`${field} mt-0`}
+          />
+        </label>
+        <label>
+          <span className="sr-only">Sort</span>
+          <select value={sort} onChange={(e) => setSort(e.target.value as SortKey)} className={`${field} mt-0 w-auto`}>
+            <option value="date">By date</option>
+            <option value="credit">Most credit</option>
+            <option value="creditPerDay">Most credit per day</option>
+            <option value="length">Longest</option>
+            <option value="report">Earliest report</option>
+          </select>
+        </label>
+      </div>
+
+      <details className="mt-3 rounded-lg border border-slate-300 bg-white">
+        <summary className="flex min-h-12 cursor-pointer items-center px-4 text-base font-medium">
+          Filters{active > 0 ? ` (${active} on)` : ""}
+        </summary>
+        <div className="space-y-4 border-t border-slate-200 px-4 py-4">
+          <fieldset>
+            <legend className="text-sm font-medium text-slate-800">Length</legend>
+            <div className="mt-1 flex flex-wrap gap-2">
+              {[1, 2, 3, 4].map((n) => (
+                <button key={n} type="button" aria-pressed={filter.lengths.includes(n)} onClick={() => toggle("lengths", n)} className={chip(filter.lengths.includes(n))}>
+                  {n === 4 ? "4+ days" : n === 1 ? "1 day" : `${n} days`}
+                </button>
+              ))}
+            </div>
+          </fieldset>
+          <label className="block">
+            <span className="text-sm font-medium text-slate-800">Layover at</span>
+            <select value={filter.layover} onChange={(e) => set("layover", e.target.value)} className={field}>
+              <option value="">Any station</option>
+              {stations.map((s) => (
+                <option key={s} value={s}>
+                  {s}
+                </option>
+              ))}
+            </select>
+          </label>
+          <div className="grid grid-cols-2 gap-3">
+            <label className="block">
+              <span className="text-sm font-medium text-slate-800">Report at or after</span>
+              <input type="time" value={filter.reportAfter} onChange={(e) => set("reportAfter", e.target.value)} className={field} />
+            </label>
+            <label className="block">
+              <span className="text-sm font-medium text-slate-800">Release by</span>
+              <input type="time" value={filter.releaseBefore} onChange={(e) => set("releaseBefore", e.target.value)} className={field} />
+            </label>
+          </div>
+          <fieldset>
+            <legend className="text-sm font-medium text-slate-800">Touches any of these days</legend>
+            <div className="mt-1 flex flex-wrap gap-2">
+              {WEEKDAYS.map((d, k) => (
+                <button key={d} type="button" aria-pressed={filter.daysOfWeek.includes(k + 1)} onClick={() => toggle("daysOfWeek", k + 1)} className={chip(filter.daysOfWeek.includes(k + 1))}>
+                  {d}
+                </button>
+              ))}
+            </div>
+          </fieldset>
+          <div className="grid grid-cols-3 gap-3">
+            <label className="block">
+              <span className="text-sm font-medium text-slate-800">Credit from (h)</span>
+              <input inputMode="decimal" value={filter.creditMin} onChange={(e) => set("creditMin", e.target.value)} className={field} />
+            </label>
+            <label className="block">
+              <span className="text-sm font-medium text-slate-800">Credit to (h)</span>
+              <input inputMode="decimal" value={filter.creditMax} onChange={(e) => set("creditMax", e.target.value)} className={field} />
+            </label>
+            <label className="block">
+              <span className="text-sm font-medium text-slate-800">Per duty day from (h)</span>
+              <input inputMode="decimal" value={filter.creditPerDayMin} onChange={(e) => set("creditPerDayMin", e.target.value)} className={field} />
+            </label>
+          </div>
+          <div className="grid grid-cols-2 gap-3">
+            <label className="block">
+              <span className="text-sm font-medium text-slate-800">Red-eye</span>
+              <select value={filter.redEye} onChange={(e) => set("redEye", e.target.value as ListFilter["redEye"])} className={field}>
+                <option value="any">Either</option>
+                <option value="yes">Only red-eyes</option>
+                <option value="no">No red-eyes</option>
+              </select>
+            </label>
+            <label className="block">
+              <span className="text-sm font-medium text-slate-800">Deadhead</span>
+              <select value={filter.deadhead} onChange={(e) => set("deadhead", e.target.value as ListFilter["deadhead"])} className={field}>
+                <option value="any">Either</option>
+                <option value="yes">With a deadhead</option>
+                <option value="no">No deadheads</option>
+              </select>
+            </label>
+          </div>
+          <button type="button" onClick={() => setFilter({ ...emptyFilter, q: filter.q })} className="min-h-11 rounded-md border border-slate-400 px-4 text-base font-medium">
+            Clear filters
+          </button>
+        </div>
+      </details>
+
+      <p className="mt-3 text-sm text-slate-700" aria-live="polite">
+        {shown.length === trips.length ? `${trips.length} trips` : `${shown.length} of ${trips.length} trips`}
+      </p>
+      <ul className="mt-2 grid gap-3 sm:grid-cols-2 lg:grid-cols-3" aria-label="Trips">
+        {shown.map((t) => (
+          <TripCard key={t.code} trip={t} />
+        ))}
+      </ul>
+    </div>
+  );
+}
+
+function TripCard({ trip }: { trip: TripSummary }) {
+  const dates = trip.startDate === trip.endDate ? shortDate(trip.startDate) : `${shortDate(trip.startDate)} – ${shortDate(trip.endDate)}`;
+  return (
+    <li data-trip={trip.code} style={{ contentVisibility: "auto", containIntrinsicSize: "auto 7rem" }}>
+      <Link href={`/trips/${trip.code}`} className="block rounded-lg border border-slate-300 bg-white px-4 py-3 shadow-sm hover:border-sky-700 focus-visible:outline-2 focus-visible:outline-sky-700">
+        <span className="flex items-baseline justify-between gap-2">
+          <span className="font-mono text-base font-semibold text-sky-900">{trip.code}</span>
+          <span className="text-sm text-slate-700">
+            {trip.days === 1 ? "1 day" : `${trip.days} days`} · <span className="font-mono text-slate-900">{hhmm(trip.creditMinutes)}</span> credit
+          </span>
+        </span>
+        <span className="mt-0.5 block text-sm font-medium">
+          {dates}
+          {trip.redEye ? <span className="ml-2 rounded bg-slate-800 px-1.5 py-0.5 text-xs font-medium text-white">red-eye</span> : null}
+        </span>
+        <span className="mt-1.5 flex flex-wrap gap-x-4 gap-y-0.5 text-sm text-slate-800">
+          <span>
+            <span className="text-slate-600">Report</span> <span className="font-mono">{trip.report}</span>
+          </span>
+          <span>
+            <span className="text-slate-600">Release</span> <span className="font-mono">{trip.release}</span>
+          </span>
+          <span>
+            <span className="text-slate-600">Layovers</span> {trip.layovers.length ? trip.layovers.join(", ") : "none"}
+          </span>
+          <span>
+            <span className="text-slate-600">Legs</span> {trip.legs}
+            {trip.deadheads ? ` (${trip.deadheads} deadhead)` : ""}
+          </span>
+        </span>
+      </Link>
+    </li>
+  );
+}
