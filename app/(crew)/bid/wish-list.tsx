@@ -163,8 +163,8 @@ function Row(props: {
         <button type="button" className={small} onClick={props.onEdit} disabled={props.disabled} aria-label={`Edit wish ${rank}`}>
           Edit
         </button>
-        <button type="button" className={small} onClick={props.onDuplicate} disabled={props.disabled} aria-label={`Duplicate wish ${rank}`}>
-          Duplicate
+        <button type="button" className={small} onClick={props.onDuplicate} disabled={props.disabled} aria-label={`Copy wish ${rank}`}>
+          Copy
         </button>
         <button type="button" className={small} onClick={props.onRemove} disabled={props.disabled} aria-label={`Remove wish ${rank}`}>
           Remove
