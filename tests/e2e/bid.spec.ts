@@ -60,7 +60,7 @@ test("a captain filters trips, adds one from its page, builds a wish of every ki
   expect(threeDay).toBeLessThan(36);
   for (const text of await trips.allTextContents()) expect(text).toContain("3 days");
   await page.getByRole("button", { name: "Clear filters" }).click();
-  await page.getByPlaceholder("Trip number or station").fill("T104");
+  await page.getByPlaceholder("Trip or station").fill("T104");
   await expect(trips).toHaveCount(1);
 
   await trips.first().getByRole("link").click();

@@ -25,19 +25,19 @@ export function TripBrowser({ trips }: { trips: TripSummary[] }) {
   return (
     <div className="mt-4">
       <div className="flex gap-2">
-        <label className="flex-1">
+        <label className="min-w-0 flex-1">
           <span className="sr-only">Search by trip number or station</span>
           <input
             type="search"
             value={filter.q}
             onChange={(e) => set("q", e.target.value)}
-            placeholder="Trip number or station"
+            placeholder="Trip or station"
             className={`${field} mt-0`}
           />
         </label>
-        <label>
+        <label className="w-36 shrink-0">
           <span className="sr-only">Sort</span>
-          <select value={sort} onChange={(e) => setSort(e.target.value as SortKey)} className={`${field} mt-0 w-auto`}>
+          <select value={sort} onChange={(e) => setSort(e.target.value as SortKey)} className={`${field} mt-0`}>
             <option value="date">By date</option>
             <option value="credit">Most credit</option>
             <option value="creditPerDay">Most credit per day</option>
