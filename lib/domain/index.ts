@@ -35,5 +35,6 @@ export * from "./time-schemas.ts";
 export * from "./time.ts";
 export * from "./trip-facts.ts";
 export * from "./trip-filter.ts";
+export * from "./trip-summary.ts";
 export * from "./wish.ts";
 export * from "./wish-sentence.ts";
