@@ -186,20 +186,26 @@ function codeOf(hash: string): string {
 }
 
 /**
- * Appends a wish for trip `code` to the user's draft (the trip page's "add to
- * my bid"), whatever revision it is at: an append reads and writes in one
- * step, so it cannot overwrite another device's save. Retries once on a race.
+ * Appends `wish` (unparsed; checked with the rest of the draft by
+ * checkWishes, i.e. bidSchema, as every save is) to the end of the user's
+ * draft, whatever revision it is at: an append reads and writes in one step,
+ * so it cannot overwrite another device's save. Retries on a race.
  */
-export async function addTripWish(user: SessionUser, code: string, now: Date): Promise<StoredDraft> {
+export async function appendWish(user: SessionUser, wish: unknown, now: Date): Promise<StoredDraft> {
   const scope = await bidScope(user);
   assertBiddingOpen(scope, now);
   for (let attempt = 0; attempt < 3; attempt++) {
     const stored = await readDraft(scope);
-    const wishes = await checkWishes(scope, [...stored.wishes, { kind: "trip", pairingIds: [code] }]);
+    const wishes = await checkWishes(scope, [...stored.wishes, wish]);
     const result = await writeDraft(scope, stored.revision, wishes);
     if (result.status === "saved") return result.draft;
   }
   throw new AppError("conflict", "your bid is being changed on another device; try again");
+}
+
+/** A trip wish for trip `code` at the end of the draft (the trip page's "add to my bid"). */
+export function addTripWish(user: SessionUser, code: string, now: Date): Promise<StoredDraft> {
+  return appendWish(user, { kind: "trip", pairingIds: [code] }, now);
 }
 
 /** The latest bid the user submitted for an earlier period at their base (else its last draft), or null. */

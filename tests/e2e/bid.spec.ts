@@ -59,7 +59,27 @@ test("a captain filters trips, adds one from its page, builds a wish of every ki
   expect(threeDay).toBeGreaterThan(0);
   expect(threeDay).toBeLessThan(36);
   for (const text of await trips.allTextContents()) expect(text).toContain("3 days");
-  await page.getByRole("button", { name: "Clear filters" }).click();
+  // Hours that are not a number are named at their field.
+  await page.getByLabel("Credit from (h)").fill("lots");
+  await expect(page.getByText("Enter hours as a number, such as 5 or 5.5")).toBeVisible();
+  await expect(page.getByLabel("Credit from (h)")).toHaveAttribute("aria-invalid", "true");
+  await page.getByLabel("Credit from (h)").fill("");
+  // Lengths that are not next to each other make no one wish: said, and the button is off.
+  const fromFilters = page.getByRole("region", { name: "Make a wish from these filters" });
+  await page.getByRole("button", { name: "1 day" }).click();
+  await expect(fromFilters).toContainText("A trip wish takes lengths next to each other");
+  await expect(fromFilters.getByRole("button", { name: "Use these filters as a trip wish" })).toBeDisabled();
+  await page.getByRole("button", { name: "1 day" }).click();
+  // 3-day trips without red-eyes, as a trip wish: the list's count and the wish's trips are the same filter.
+  await page.getByLabel("Red-eye").selectOption("no");
+  await expect(fromFilters.locator("[data-wish-preview]")).toHaveText("Give me trips of 3 days, without red-eyes");
+  await expectAccessible(page);
+  await fromFilters.getByRole("button", { name: "Use these filters as a trip wish" }).click();
+  await expect(page).toHaveURL(/\/bid\?wish=1$/);
+  await expect(page.getByText("Your trip filters became wish 1")).toBeVisible();
+  expect(await sentences(page)).toEqual(["Give me trips of 3 days, without red-eyes"]);
+
+  await page.goto("/trips");
   await page.getByPlaceholder("Trip or station").fill("T104");
   await expect(trips).toHaveCount(1);
 
@@ -70,8 +90,8 @@ test("a captain filters trips, adds one from its page, builds a wish of every ki
   await expectAccessible(page);
   await page.getByRole("button", { name: "Add to my bid" }).click();
   await expect(page).toHaveURL(/\/bid\?added=T104$/);
-  await expect(page.locator("[data-wish]")).toHaveCount(1);
-  expect(await sentences(page)).toEqual(["Give me trip T104"]);
+  await expect(page.locator("[data-wish]")).toHaveCount(2);
+  expect(await sentences(page)).toEqual(["Give me trips of 3 days, without red-eyes", "Give me trip T104"]);
 
   await addWish(page, "Trips to avoid", () => page.getByLabel("Report before").fill("06:00"));
   await addWish(page, "Days to keep free", async () => {
@@ -96,6 +116,7 @@ test("a captain filters trips, adds one from its page, builds a wish of every ki
   await addWish(page, "Fly with a colleague", () => page.getByLabel("Colleague's employee number").fill("4114"));
   await saved(page);
   expect(await sentences(page)).toEqual([
+    "Give me trips of 3 days, without red-eyes",
     "Give me trip T104",
     "Keep me off trips reporting before 06:00",
     "Keep 24–26 Jan free",
@@ -105,11 +126,12 @@ test("a captain filters trips, adds one from its page, builds a wish of every ki
   ]);
   await expectAccessible(page);
 
-  // Touch: drag wish 3 onto place 1.
-  await page.evaluate(() => window.scrollTo(0, 0));
-  await touchDrag(page, page.locator('[data-wish="3"] [data-handle]'), page.locator('[data-wish="1"]'));
+  // Touch: drag wish 4 onto place 1 (both on screen: wish 1 just under the page header).
+  await page.locator('[data-wish="1"]').evaluate((el) => window.scrollTo(0, el.getBoundingClientRect().top + window.scrollY - 80));
+  await touchDrag(page, page.locator('[data-wish="4"] [data-handle]'), page.locator('[data-wish="1"]'));
   await expect.poll(() => sentences(page)).toEqual([
     "Keep 24–26 Jan free",
+    "Give me trips of 3 days, without red-eyes",
     "Give me trip T104",
     "Keep me off trips reporting before 06:00",
     "At most 4 days on in a row, and weekends free",
@@ -123,10 +145,10 @@ test("a captain filters trips, adds one from its page, builds a wish of every ki
   await page.keyboard.press("ArrowDown");
   await page.waitForTimeout(150);
   await page.keyboard.press("Space");
-  await expect.poll(async () => (await sentences(page)).slice(0, 2)).toEqual(["Give me trip T104", "Keep 24–26 Jan free"]);
+  await expect.poll(async () => (await sentences(page)).slice(0, 2)).toEqual(["Give me trips of 3 days, without red-eyes", "Keep 24–26 Jan free"]);
   // The button alternative.
-  await page.getByRole("button", { name: "Move wish 6 up" }).click();
-  await expect.poll(async () => (await sentences(page)).slice(4)).toEqual(["Fly the same trips as employee 4114", "Credit between 70 and 80 h"]);
+  await page.getByRole("button", { name: "Move wish 7 up" }).click();
+  await expect.poll(async () => (await sentences(page)).slice(5)).toEqual(["Fly the same trips as employee 4114", "Credit between 70 and 80 h"]);
   await saved(page);
   const order = await sentences(page);
 
@@ -142,14 +164,14 @@ test("a captain filters trips, adds one from its page, builds a wish of every ki
   await expect(page.locator('[data-version-row="1"]')).toContainText(code1);
 
   // Editing after submission makes version 2; version 1 stays as it was.
-  await page.getByRole("button", { name: "Remove wish 6" }).click();
+  await page.getByRole("button", { name: "Remove wish 7" }).click();
   await saved(page);
   await page.getByRole("button", { name: "Submit changes" }).click();
   await expect(receipt).toContainText("Submitted: version 2");
   await expect(receipt.locator("[data-receipt-code]")).not.toHaveText(code1);
   versionUrl = (await page.locator('[data-version-row="1"]').getAttribute("href"))!;
   await page.goto(versionUrl);
-  await expect(page.getByRole("list", { name: "Wishes of this version" }).getByRole("listitem")).toHaveCount(6);
+  await expect(page.getByRole("list", { name: "Wishes of this version" }).getByRole("listitem")).toHaveCount(7);
 });
 
 test("a second device editing the same bid sees a conflict with both versions, and nothing is overwritten", async ({ browser }) => {

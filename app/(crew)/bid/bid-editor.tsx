@@ -20,6 +20,8 @@ interface Props {
   closed: boolean;
   previousPeriod: string | null;
   added: string | null;
+  /** rank of a wish just made from the trip list's filters */
+  madeFromFilters: number | null;
 }
 
 type Status =
@@ -62,7 +64,11 @@ export function BidEditor(props: Props) {
   const [receipt, setReceipt] = useState<{ version: BidVersion; unchanged: boolean } | null>(null);
   const [editing, setEditing] = useState<{ key: string | null; kind: WishKind } | null>(null);
   const [picking, setPicking] = useState(false);
-  const [note, setNote] = useState<string | null>(props.added ? `Trip ${props.added} was added at the end of your bid.` : null);
+  const [note, setNote] = useState<string | null>(() => {
+    if (props.added) return `Trip ${props.added} was added at the end of your bid.`;
+    const made = props.madeFromFilters ? props.draft.wishes[props.madeFromFilters - 1] : undefined;
+    return made ? `Your trip filters became wish ${props.madeFromFilters}: “${wishSentence(made)}”.` : null;
+  });
   const [problems, setProblems] = useState<Record<number, string>>({});
   const [submitting, setSubmitting] = useState(false);
 

@@ -8,7 +8,7 @@ import { Countdown } from "./countdown";
 
 export const metadata: Metadata = { title: "My bid" };
 
-export default async function BidPage({ searchParams }: { searchParams: Promise<{ added?: string }> }) {
+export default async function BidPage({ searchParams }: { searchParams: Promise<{ added?: string; wish?: string }> }) {
   const user = await requireRole("crew");
   const view = await loadBid(user).catch((error: unknown) => {
     if (isAppError(error, "not_found")) return null;
@@ -27,7 +27,10 @@ export default async function BidPage({ searchParams }: { searchParams: Promise<
   const deadline = scope.period.deadline.toISOString();
   const closed = scope.period.state !== "open" || at.getTime() >= scope.period.deadline.getTime();
   const previous = await previousBid(scope);
-  const { added } = await searchParams;
+  const { added, wish } = await searchParams;
+  // ?wish=N: wish N was just made from the trip list's filters.
+  const madeRank = Number(wish);
+  const made = Number.isInteger(madeRank) && madeRank >= 1 && madeRank <= draft.wishes.length ? madeRank : null;
   return (
     <section>
       <h1 className="text-xl font-semibold">My bid · {scope.period.name}</h1>
@@ -44,6 +47,7 @@ export default async function BidPage({ searchParams }: { searchParams: Promise<
         closed={closed}
         previousPeriod={previous?.periodName ?? null}
         added={typeof added === "string" ? added : null}
+        madeFromFilters={made}
       />
     </section>
   );

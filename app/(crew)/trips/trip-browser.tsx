@@ -1,13 +1,17 @@
 "use client";
 
 import Link from "next/link";
-import { useMemo, useState } from "react";
-import type { TripSummary } from "@/lib/db/periods";
+import { useMemo, useState, useTransition } from "react";
+import type { TripSummary } from "@/lib/domain/trip-summary";
 import { hhmm, shortDate } from "@/app/ui/format";
-import { activeFilters, emptyFilter, filterTrips, type ListFilter, type SortKey } from "./trip-list-filter";
+import { wishSchema } from "@/lib/domain/wish";
+import { wishSentence } from "@/lib/domain/wish-sentence";
+import { addWishFromList } from "./actions";
+import { activeFilters, asTripFilter, emptyFilter, filterErrors, filterTrips, type ListFilter, type SortKey } from "./trip-list-filter";
 
 const WEEKDAYS = ["Mon", "Tue", "Wed", "Thu", "Fri", "Sat", "Sun"];
 const field = "mt-1 block w-full rounded-md border border-slate-400 bg-white px-3 py-2.5 text-base";
+const badField = "mt-1 block w-full rounded-md border border-red-700 bg-white px-3 py-2.5 text-base ring-1 ring-red-700";
 const chip = (on: boolean) =>
   `min-h-11 min-w-11 rounded-md border px-3 text-base font-medium ${on ? "border-sky-800 bg-sky-800 text-white" : "border-slate-400 bg-white text-slate-900"}`;
 
@@ -21,6 +25,7 @@ export function TripBrowser({ trips }: { trips: TripSummary[] }) {
   const toggle = (key: "lengths" | "daysOfWeek", n: number) =>
     setFilter((f) => ({ ...f, [key]: f[key].includes(n) ? f[key].filter((x) => x !== n) : [...f[key], n] }));
   const active = activeFilters(filter);
+  const errors = filterErrors(filter);
 
   return (
     <div className="mt-4">
@@ -93,20 +98,11 @@ export function TripBrowser({ trips }: { trips: TripSummary[] }) {
               ))}
             </div>
           </fieldset>
-          <div className="grid grid-cols-3 gap-3">
-            <label className="block">
-              <span className="text-sm font-medium text-slate-800">Credit from (h)</span>
-              <input inputMode="decimal" value={filter.creditMin} onChange={(e) => set("creditMin", e.target.value)} className={field} />
-            </label>
-            <label className="block">
-              <span className="text-sm font-medium text-slate-800">Credit to (h)</span>
-              <input inputMode="decimal" value={filter.creditMax} onChange={(e) => set("creditMax", e.target.value)} className={field} />
-            </label>
-            <label className="block">
-              <span className="text-sm font-medium text-slate-800">Per duty day from (h)</span>
-              <input inputMode="decimal" value={filter.creditPerDayMin} onChange={(e) => set("creditPerDayMin", e.target.value)} className={field} />
-            </label>
+          <div className="grid grid-cols-2 gap-3">
+            <HoursInput id="creditMin" label="Credit from (h)" value={filter.creditMin} error={errors.creditMin} onChange={(v) => set("creditMin", v)} />
+            <HoursInput id="creditMax" label="Credit to (h)" value={filter.creditMax} error={errors.creditMax} onChange={(v) => set("creditMax", v)} />
           </div>
+          <HoursInput id="creditPerDayMin" label="Credit per duty day, at least (h)" value={filter.creditPerDayMin} error={errors.creditPerDayMin} onChange={(v) => set("creditPerDayMin", v)} />
           <div className="grid grid-cols-2 gap-3">
             <label className="block">
               <span className="text-sm font-medium text-slate-800">Red-eye</span>
@@ -134,12 +130,82 @@ export function TripBrowser({ trips }: { trips: TripSummary[] }) {
       <p className="mt-3 text-sm text-slate-700" aria-live="polite">
         {shown.length === trips.length ? `${trips.length} trips` : `${shown.length} of ${trips.length} trips`}
       </p>
+      {active > 0 ? <WishFromFilters filter={filter} /> : null}
       <ul className="mt-2 grid gap-3 sm:grid-cols-2 lg:grid-cols-3" aria-label="Trips">
         {shown.map((t) => (
           <TripCard key={t.code} trip={t} />
         ))}
       </ul>
     </div>
+  );
+}
+
+function HoursInput({ id, label, value, error, onChange }: { id: string; label: string; value: string; error: string | undefined; onChange: (value: string) => void }) {
+  return (
+    <div>
+      <label htmlFor={`filter-${id}`} className="block text-sm font-medium text-slate-800">
+        {label}
+      </label>
+      <input
+        id={`filter-${id}`}
+        inputMode="decimal"
+        value={value}
+        onChange={(e) => onChange(e.target.value)}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `filter-${id}-error` : undefined}
+        className={error ? badField : field}
+      />
+      {error ? (
+        <p id={`filter-${id}-error`} className="mt-1 text-sm font-medium text-red-800">
+          {error}
+        </p>
+      ) : null}
+    </div>
+  );
+}
+
+/**
+ * "Use these filters as a trip wish": the list's filters as a trip filter,
+ * read with wishSchema (as the wish form reads its fields) and appended to the
+ * bid on the server, which checks it again with bidSchema.
+ */
+function WishFromFilters({ filter }: { filter: ListFilter }) {
+  const [pending, start] = useTransition();
+  const [refusal, setRefusal] = useState<string | null>(null);
+  const made = asTripFilter(filter);
+  const wish = made.ok ? wishSchema.safeParse({ kind: "trip", filter: made.filter, count: 1 }) : null;
+  const problem = !made.ok ? made.message : wish && !wish.success ? (wish.error.issues[0]?.message ?? "These filters do not make a wish.") : null;
+  return (
+    <section aria-label="Make a wish from these filters" className="mt-2 rounded-lg border border-sky-800 bg-sky-50 px-3 py-3">
+      {wish?.success ? (
+        <p className="text-sm text-slate-900">
+          <span className="font-medium">Your wish would read:</span> <span data-wish-preview>{wishSentence(wish.data)}</span>
+        </p>
+      ) : null}
+      {made.ok && made.leftOut.length > 0 ? <p className="mt-1 text-sm text-slate-800">A trip wish leaves out {made.leftOut.join(" and ")}.</p> : null}
+      {problem ? <p className="text-sm font-medium text-red-800">{problem}</p> : null}
+      {refusal ? (
+        <p role="alert" className="mt-1 text-sm font-medium text-red-800">
+          {refusal}
+        </p>
+      ) : null}
+      <button
+        type="button"
+        disabled={!wish?.success || pending}
+        onClick={() =>
+          start(async () => {
+            if (!wish?.success) return;
+            setRefusal(null);
+            const outcome = await addWishFromList({ wish: wish.data });
+            // On success the action moves to the bid page; only a refusal comes back.
+            if (outcome) setRefusal(outcome.message);
+          })
+        }
+        className="mt-2 min-h-12 w-full rounded-md bg-sky-800 px-4 text-base font-semibold text-white hover:bg-sky-900 disabled:opacity-50"
+      >
+        {pending ? "Adding…" : "Use these filters as a trip wish"}
+      </button>
+    </section>
   );
 }
 
