@@ -211,6 +211,24 @@ test("another crew member's bid is not reachable by its address", async ({ page 
   await expect(page.getByText("Fly the same trips as employee 4114")).toHaveCount(0);
 });
 
+test("a crew member starts from last period's bid: what carries over is copied and saved, what belonged to that month is named", async ({ page }) => {
+  await signIn(page, "sam@larkfield.test");
+  await expect(page).toHaveURL(/\/trips$/);
+  await page.goto("/bid");
+  await expect(page.locator("[data-wish]")).toHaveCount(0);
+  await page.getByRole("button", { name: "Start from my December 2026 bid" }).click();
+  // seed/past-period.ts: six wishes; the free days and the named trip belonged to December.
+  await expect(page.getByRole("status").filter({ hasText: "Copied 4 wishes" })).toHaveText(
+    "Copied 4 wishes from last period. Left out: wish 2: free days named last period's dates; wish 5: it named last period's trips (T105).",
+  );
+  const copied = ["At least 2 of: trips of 3–4 days, without red-eyes", "Keep me off trips reporting before 06:00", "At most 4 days on in a row", "Credit between 72 and 84 h"];
+  expect(await sentences(page)).toEqual(copied);
+  await saved(page);
+  await page.reload();
+  expect(await sentences(page)).toEqual(copied);
+  await expect(page.getByRole("button", { name: "Start from my December 2026 bid" })).toHaveCount(0);
+});
+
 test("a submission after the deadline is refused with a clear message", async ({ page }) => {
   const { url } = JSON.parse(fs.readFileSync(E2E_DATABASE_FILE, "utf8")) as { url: string };
   await signIn(page, "sam@larkfield.test");

@@ -1,7 +1,7 @@
 /**
  * The web server the browser tests talk to: a database of its own (see
  * tests/support/test-database.ts), migrated and seeded with the small scenario
- * at a fixed clock, a production build when the sources changed, `next start`
+ * at a fixed clock and the period before it (seed/past-period.ts), a production build when the sources changed, `next start`
  * on the test port. Playwright starts and stops this process.
  */
 import { spawn, spawnSync } from "node:child_process";
@@ -10,6 +10,7 @@ import path from "node:path";
 import { createPrisma } from "../../lib/db/client.ts";
 import { REPO_ROOT } from "../../lib/db/local-server.ts";
 import { needsBuild } from "../../lib/cli/build-state.ts";
+import { writePastPeriod } from "../../seed/past-period.ts";
 import { smallScenario } from "../../seed/small-scenario.ts";
 import { writeScenario } from "../../seed/write-scenario.ts";
 import { createTestDatabase } from "../support/test-database.ts";
@@ -17,7 +18,10 @@ import { E2E_DATABASE_FILE, E2E_NOW, E2E_PORT } from "./constants.ts";
 
 const db = await createTestDatabase("e2e");
 const prisma = createPrisma(db.url);
-await writeScenario(prisma, smallScenario({ seed: 11, now: new Date(E2E_NOW) }));
+const scenario = smallScenario({ seed: 11, now: new Date(E2E_NOW) });
+const { periodId } = await writeScenario(prisma, scenario);
+// December 2026 with a bid each crew account submitted, for "start from my last bid".
+await writePastPeriod(prisma, periodId, scenario.users.flatMap((u) => (u.crewId ? [u.crewId] : [])));
 await prisma.$disconnect();
 // Specs that must change the data behind the server's back (a deadline that has passed) read the URL here.
 fs.mkdirSync(path.dirname(E2E_DATABASE_FILE), { recursive: true });
