@@ -18,7 +18,9 @@ import { E2E_DATABASE_FILE, E2E_NOW, E2E_PORT } from "./constants.ts";
 
 const db = await createTestDatabase("e2e");
 const prisma = createPrisma(db.url);
-const scenario = smallScenario({ seed: 11, now: new Date(E2E_NOW) });
+// E2E_PAIRINGS: a bigger month for measuring the trip list (tests/e2e/measure.config.ts); the tests use the default 36.
+const pairings = process.env.E2E_PAIRINGS ? Number(process.env.E2E_PAIRINGS) : undefined;
+const scenario = smallScenario({ seed: 11, now: new Date(E2E_NOW), pairings });
 const { periodId } = await writeScenario(prisma, scenario);
 // December 2026 with a bid each crew account submitted, for "start from my last bid".
 await writePastPeriod(prisma, periodId, scenario.users.flatMap((u) => (u.crewId ? [u.crewId] : [])));

@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import { useMemo, useState, useTransition } from "react";
+import { memo, useEffect, useMemo, useRef, useState, useTransition } from "react";
 import type { TripSummary } from "@/lib/domain/trip-summary";
 import { hhmm, shortDate } from "@/app/ui/format";
 import { wishSchema } from "@/lib/domain/wish";
@@ -15,15 +15,44 @@ const badField = "mt-1 block w-full rounded-md border border-red-700 bg-white px
 const chip = (on: boolean) =>
   `min-h-11 min-w-11 rounded-md border px-3 text-base font-medium ${on ? "border-sky-800 bg-sky-800 text-white" : "border-slate-400 bg-white text-slate-900"}`;
 
+/**
+ * Cards rendered at first and added per step. With several hundred trips,
+ * rendering them all made the page heavy to load and every filter change slow
+ * on a phone (DEVELOPERS.md has the figures); the rest follow as the list is
+ * scrolled (or "Show more" is tapped). Filters and search always read every trip.
+ */
+const STEP = 40;
+
 /** The period's trips with search, filters and sort, all on the phone. */
 export function TripBrowser({ trips }: { trips: TripSummary[] }) {
-  const [filter, setFilter] = useState<ListFilter>(emptyFilter);
-  const [sort, setSort] = useState<SortKey>("date");
+  const [filter, setFilterState] = useState<ListFilter>(emptyFilter);
+  const [sort, setSortState] = useState<SortKey>("date");
+  const [limit, setLimit] = useState(STEP);
   const shown = useMemo(() => filterTrips(trips, filter, sort), [trips, filter, sort]);
   const stations = useMemo(() => [...new Set(trips.flatMap((t) => t.layovers))].sort(), [trips]);
+  // A new filter or order starts again at the top of the list.
+  const setFilter = (next: ListFilter | ((f: ListFilter) => ListFilter)) => {
+    setFilterState(next);
+    setLimit(STEP);
+  };
+  const setSort = (next: SortKey) => {
+    setSortState(next);
+    setLimit(STEP);
+  };
   const set = <K extends keyof ListFilter>(key: K, value: ListFilter[K]) => setFilter((f) => ({ ...f, [key]: value }));
   const toggle = (key: "lengths" | "daysOfWeek", n: number) =>
     setFilter((f) => ({ ...f, [key]: f[key].includes(n) ? f[key].filter((x) => x !== n) : [...f[key], n] }));
+  const more = useRef<HTMLDivElement>(null);
+  const hasMore = shown.length > limit;
+  useEffect(() => {
+    const el = more.current;
+    if (!el || !hasMore || typeof IntersectionObserver === "undefined") return;
+    const io = new IntersectionObserver((entries) => {
+      if (entries.some((e) => e.isIntersecting)) setLimit((n) => n + STEP);
+    }, { rootMargin: "600px 0px" });
+    io.observe(el);
+    return () => io.disconnect();
+  }, [hasMore, limit]);
   const active = activeFilters(filter);
   const errors = filterErrors(filter);
 
@@ -132,10 +161,17 @@ export function TripBrowser({ trips }: { trips: TripSummary[] }) {
       </p>
       {active > 0 ? <WishFromFilters filter={filter} /> : null}
       <ul className="mt-2 grid gap-3 sm:grid-cols-2 lg:grid-cols-3" aria-label="Trips">
-        {shown.map((t) => (
+        {shown.slice(0, limit).map((t) => (
           <TripCard key={t.code} trip={t} />
         ))}
       </ul>
+      {hasMore ? (
+        <div ref={more} className="mt-3">
+          <button type="button" onClick={() => setLimit((n) => n + STEP)} className="min-h-12 w-full rounded-md border border-slate-400 bg-white px-4 text-base font-medium">
+            Show more trips ({shown.length - limit} left)
+          </button>
+        </div>
+      ) : null}
     </div>
   );
 }
@@ -209,7 +245,8 @@ function WishFromFilters({ filter }: { filter: ListFilter }) {
   );
 }
 
-function TripCard({ trip }: { trip: TripSummary }) {
+/** One trip; memoised, since a filter change keeps most cards as they were. */
+const TripCard = memo(function TripCard({ trip }: { trip: TripSummary }) {
   const dates = trip.startDate === trip.endDate ? shortDate(trip.startDate) : `${shortDate(trip.startDate)} – ${shortDate(trip.endDate)}`;
   return (
     <li data-trip={trip.code} style={{ contentVisibility: "auto", containIntrinsicSize: "auto 7rem" }}>
@@ -242,4 +279,4 @@ function TripCard({ trip }: { trip: TripSummary }) {
       </Link>
     </li>
   );
-}
+});
