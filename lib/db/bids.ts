@@ -208,6 +208,12 @@ export function addTripWish(user: SessionUser, code: string, now: Date): Promise
   return appendWish(user, { kind: "trip", pairingIds: [code] }, now);
 }
 
+/** The trip numbers of the scope's period, sorted: what the wish form checks named trips against (as checkWishes does). */
+export async function periodTripCodes(scope: BidScope): Promise<string[]> {
+  const rows = await db().pairing.findMany({ where: { bidPeriodId: scope.period.id }, select: { code: true }, orderBy: { code: "asc" } });
+  return rows.map((r) => r.code);
+}
+
 /** The latest bid the user submitted for an earlier period at their base (else its last draft), or null. */
 export async function previousBid(scope: BidScope): Promise<{ periodName: string; wishes: Wish[] } | null> {
   const period = await db().bidPeriod.findFirst({

@@ -94,8 +94,19 @@ test("a captain filters trips, adds one from its page, builds a wish of every ki
   expect(await sentences(page)).toEqual(["Give me trips of 3 days, without red-eyes", "Give me trip T104"]);
 
   await addWish(page, "Trips to avoid", () => page.getByLabel("Report before").fill("06:00"));
+  // A trip number or a day outside the period is named at its field before anything is saved.
+  await page.getByRole("button", { name: "Add a wish" }).click();
+  await page.getByRole("button", { name: "Trips to avoid" }).click();
+  await page.getByLabel("Trip numbers").fill("T999");
+  await page.getByRole("button", { name: "Add wish" }).click();
+  await expect(page.getByText("There is no trip T999 in January 2027")).toBeVisible();
+  await expect(page.getByLabel("Trip numbers")).toHaveAttribute("aria-invalid", "true");
+  await page.getByRole("button", { name: "Cancel" }).click();
   await addWish(page, "Days to keep free", async () => {
     await page.getByLabel("First day").fill("2027-01-24");
+    await page.getByLabel("Last day").fill("2027-02-02");
+    await page.getByRole("button", { name: "Add wish" }).click();
+    await expect(page.getByText("Choose days of January 2027 (2027-01-01 to 2027-01-31)")).toBeVisible();
     await page.getByLabel("Last day").fill("2027-01-26");
   });
   await addWish(page, "Work pattern", async () => {

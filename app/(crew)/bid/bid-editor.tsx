@@ -8,7 +8,7 @@ import { wishSentence } from "@/lib/domain/wish-sentence";
 import type { BidVersion, StoredDraft } from "@/lib/db/bids";
 import { copyLastPeriodAction, saveDraftAction, submitBidAction, type SaveOutcome } from "./actions";
 import { KIND_LABEL } from "./kind-label";
-import { WishForm } from "./wish-form";
+import { WishForm, type FormPeriod } from "./wish-form";
 import { WishList, type Item } from "./wish-list";
 
 interface Props {
@@ -22,6 +22,7 @@ interface Props {
   added: string | null;
   /** rank of a wish just made from the trip list's filters */
   madeFromFilters: number | null;
+  period: FormPeriod;
 }
 
 type Status =
@@ -148,6 +149,7 @@ export function BidEditor(props: Props) {
   const change = useCallback(
     (next: Item[]) => {
       setItems(next);
+      setNote(null);
       const s = state.current;
       s.wishes = next.map((i) => i.wish);
       keepLocal(s.wishes, s.revision);
@@ -271,6 +273,7 @@ export function BidEditor(props: Props) {
         <div className="mt-4 rounded-lg border border-sky-800 bg-white px-4 py-4">
           <WishForm
             kind={editing.kind}
+            period={props.period}
             initial={editingItem?.wish ?? null}
             onCancel={() => setEditing(null)}
             onDone={(wish) => {
@@ -339,7 +342,7 @@ export function BidEditor(props: Props) {
             </button>
             <button
               type="button"
-              disabled={disabled || submitting || items.length === 0 || !unsubmitted}
+              disabled={disabled || submitting || items.length === 0 || !unsubmitted || status.kind === "invalid"}
               onClick={() => void submit()}
               className="min-h-12 flex-1 rounded-md bg-sky-800 px-3 text-base font-semibold text-white hover:bg-sky-900 disabled:opacity-50"
             >

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { requireRole } from "@/lib/auth/session";
-import { loadBid, previousBid } from "@/lib/db/bids";
+import { loadBid, periodTripCodes, previousBid } from "@/lib/db/bids";
 import { now } from "@/lib/clock";
 import { isAppError, localDateTimeLabel } from "@/lib/domain/index";
 import { BidEditor } from "./bid-editor";
@@ -26,7 +26,7 @@ export default async function BidPage({ searchParams }: { searchParams: Promise<
   const at = now();
   const deadline = scope.period.deadline.toISOString();
   const closed = scope.period.state !== "open" || at.getTime() >= scope.period.deadline.getTime();
-  const previous = await previousBid(scope);
+  const [previous, tripCodes] = await Promise.all([previousBid(scope), periodTripCodes(scope)]);
   const { added, wish } = await searchParams;
   // ?wish=N: wish N was just made from the trip list's filters.
   const madeRank = Number(wish);
@@ -48,6 +48,7 @@ export default async function BidPage({ searchParams }: { searchParams: Promise<
         previousPeriod={previous?.periodName ?? null}
         added={typeof added === "string" ? added : null}
         madeFromFilters={made}
+        period={{ name: scope.period.name, startDate: scope.period.startDate, endDate: scope.period.endDate, tripCodes }}
       />
     </section>
   );

@@ -77,11 +77,19 @@ function fieldsOf(wish: Wish | null): Fields {
 
 type Errors = Record<string, string>;
 
+/** What the form checks against besides the schema: the period's days and trip numbers (the server checks the same, lib/db/bid-check.ts). */
+export interface FormPeriod {
+  name: string;
+  startDate: string;
+  endDate: string;
+  tripCodes: string[];
+}
+
 /**
  * Reads the fields into a wish with lib/domain's wishSchema (the schema the
  * server checks with too); a field that is wrong gets its message under it.
  */
-function readWish(kind: WishKind, v: Fields): { wish?: Wish; errors: Errors } {
+function readWish(kind: WishKind, v: Fields, period: FormPeriod): { wish?: Wish; errors: Errors } {
   const errors: Errors = {};
   const list = (text: string) => text.split(/[\s,;]+/).map((s) => s.trim().toUpperCase()).filter(Boolean);
   const num = (key: string, text: string, scale = 1): number | undefined => {
@@ -96,6 +104,9 @@ function readWish(kind: WishKind, v: Fields): { wish?: Wish; errors: Errors } {
   let raw: Record<string, unknown> = { kind };
   if (kind === "trip" || kind === "no-trip") {
     const ids = list(v.pairingIds);
+    const known = new Set(period.tripCodes);
+    const unknown = ids.filter((id) => !known.has(id));
+    if (unknown.length > 0) errors.pairingIds = `There is no trip ${unknown.join(", ")} in ${period.name}`;
     const filter: Record<string, unknown> = {};
     const lo = num("filter.lengthDays", v.lengthMin);
     const hi = num("filter.lengthDays", v.lengthMax);
@@ -125,6 +136,8 @@ function readWish(kind: WishKind, v: Fields): { wish?: Wish; errors: Errors } {
         dates.push(new Date(t).toISOString().slice(0, 10));
       }
     });
+    const outside = v.ranges.findIndex((r) => [r.from, r.to].some((d) => d && (d < period.startDate || d > period.endDate)));
+    if (outside >= 0) errors[`ranges.${outside}`] ??= `Choose days of ${period.name} (${period.startDate} to ${period.endDate})`;
     raw = { kind, dates };
   } else if (kind === "rhythm") {
     raw = { kind, ...(v.maxDaysOn.trim() && { maxDaysOn: num("maxDaysOn", v.maxDaysOn) }), ...(v.weekendsOff && { weekendsOff: true }) };
@@ -147,7 +160,7 @@ function readWish(kind: WishKind, v: Fields): { wish?: Wish; errors: Errors } {
 }
 
 /** The form that adds or edits one wish. */
-export function WishForm({ kind, initial, onDone, onCancel }: { kind: WishKind; initial: Wish | null; onDone: (wish: Wish) => void; onCancel: () => void }) {
+export function WishForm({ kind, period, initial, onDone, onCancel }: { kind: WishKind; period: FormPeriod; initial: Wish | null; onDone: (wish: Wish) => void; onCancel: () => void }) {
   const [v, setV] = useState<Fields>(() => fieldsOf(initial));
   const [errors, setErrors] = useState<Errors>({});
   const id = useId();
@@ -156,7 +169,7 @@ export function WishForm({ kind, initial, onDone, onCancel }: { kind: WishKind; 
 
   function submit(e: React.FormEvent) {
     e.preventDefault();
-    const { wish, errors: found } = readWish(kind, v);
+    const { wish, errors: found } = readWish(kind, v, period);
     setErrors(found);
     if (wish) onDone(wish);
   }
@@ -251,6 +264,8 @@ export function WishForm({ kind, initial, onDone, onCancel }: { kind: WishKind; 
                 <input
                   id={`${id}-from-${k}`}
                   type="date"
+                  min={period.startDate}
+                  max={period.endDate}
                   value={r.from}
                   aria-invalid={errors[`ranges.${k}`] || errors.dates ? true : undefined}
                   onChange={(e) => set("ranges", v.ranges.map((x, j) => (j === k ? { ...x, from: e.target.value } : x)))}
@@ -261,6 +276,8 @@ export function WishForm({ kind, initial, onDone, onCancel }: { kind: WishKind; 
                 <input
                   id={`${id}-to-${k}`}
                   type="date"
+                  min={period.startDate}
+                  max={period.endDate}
                   value={r.to}
                   aria-invalid={errors[`ranges.${k}`] ? true : undefined}
                   onChange={(e) => set("ranges", v.ranges.map((x, j) => (j === k ? { ...x, to: e.target.value } : x)))}
