@@ -177,8 +177,10 @@ test("a captain filters trips, adds one from its page, builds a wish of every ki
   // Editing after submission makes version 2; version 1 stays as it was.
   await page.getByRole("button", { name: "Remove wish 7" }).click();
   await saved(page);
+  await expect(page.locator("[data-unsubmitted]")).toHaveText("You have changes since version 1. Until you submit them, version 1 is the bid that counts.");
   await page.getByRole("button", { name: "Submit changes" }).click();
   await expect(receipt).toContainText("Submitted: version 2");
+  await expect(page.locator("[data-unsubmitted]")).toHaveCount(0);
   await expect(receipt.locator("[data-receipt-code]")).not.toHaveText(code1);
   versionUrl = (await page.locator('[data-version-row="1"]').getAttribute("href"))!;
   await page.goto(versionUrl);

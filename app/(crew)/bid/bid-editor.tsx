@@ -150,6 +150,8 @@ export function BidEditor(props: Props) {
     (next: Item[]) => {
       setItems(next);
       setNote(null);
+      // The receipt is of the version submitted; a changed draft is not it any more (the receipt stays under versions).
+      setReceipt(null);
       const s = state.current;
       s.wishes = next.map((i) => i.wish);
       keepLocal(s.wishes, s.revision);
@@ -268,6 +270,11 @@ export function BidEditor(props: Props) {
       ) : null}
       {status.kind === "conflict" ? <Conflict mine={items.map((i) => i.wish)} stored={status.stored} zone={props.zone} onChoose={resolve} /> : null}
       {receipt ? <Receipt version={receipt.version} unchanged={receipt.unchanged} zone={props.zone} /> : null}
+      {latest && unsubmitted && !receipt && status.kind !== "conflict" ? (
+        <p className="mt-2 rounded-md border border-amber-700 bg-amber-50 px-3 py-2 text-sm font-medium text-amber-950" data-unsubmitted>
+          You have changes since version {latest.version}. Until you submit them, version {latest.version} is the bid that counts.
+        </p>
+      ) : null}
 
       {editing ? (
         <div className="mt-4 rounded-lg border border-sky-800 bg-white px-4 py-4">
@@ -344,7 +351,7 @@ export function BidEditor(props: Props) {
               type="button"
               disabled={disabled || submitting || items.length === 0 || !unsubmitted || status.kind === "invalid"}
               onClick={() => void submit()}
-              className="min-h-12 flex-1 rounded-md bg-sky-800 px-3 text-base font-semibold text-white hover:bg-sky-900 disabled:opacity-50"
+              className="min-h-12 flex-1 whitespace-nowrap rounded-md bg-sky-800 px-2 text-base font-semibold text-white hover:bg-sky-900 disabled:opacity-50"
             >
               {submitting ? "Submitting…" : latest && !unsubmitted ? "Submitted" : latest ? "Submit changes" : "Submit bid"}
             </button>
@@ -452,7 +459,10 @@ function Versions({ versions, zone }: { versions: BidVersion[]; zone: string }) 
         {versions.map((v) => (
           <li key={v.id}>
             <Link href={`/bid/versions/${v.id}`} className="flex min-h-12 flex-wrap items-center justify-between gap-x-3 px-4 py-2 text-base" data-version-row={v.version}>
-              <span className="font-medium">Version {v.version}</span>
+              <span className="font-medium">
+                Version {v.version}
+                {v.id === versions[0]!.id ? <span className="ml-2 rounded bg-emerald-800 px-1.5 py-0.5 text-xs font-medium text-white">counts</span> : null}
+              </span>
               <span className="font-mono text-sm">{v.receiptCode}</span>
               <span className="text-sm text-slate-700">{when(v.submittedAt, zone)}</span>
             </Link>
