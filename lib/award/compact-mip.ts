@@ -35,8 +35,8 @@ import { AppError, matchesTripSelection, pairingDates, rankWeight } from "../dom
 import { assembleAward, type Choice } from "./assemble.ts";
 import { greedyChoices } from "./greedy.ts";
 import { loadHighs } from "./master.ts";
-import { checkCrewLine, prepareProblem } from "./problem.ts";
-import { bestScores } from "./pricing.ts";
+import { checkCrewLine, prepareProblem, successorPositions } from "./problem.ts";
+import { BEST_LINE_NODES, bestScores } from "./pricing.ts";
 import type { AwardResult } from "./solve.ts";
 
 export interface CompactMipOptions {
@@ -80,7 +80,7 @@ export async function compactMipAward(instance: Instance, options: CompactMipOpt
   const limitSeconds = options.timeLimitSeconds ?? settings.timeLimitSeconds;
   const problem = prepareProblem(instance);
   const t1 = performance.now();
-  const alone = bestScores(problem, 100_000);
+  const alone = bestScores(problem, BEST_LINE_NODES);
   const best = alone.best;
   const t2 = performance.now();
   const { pairings, need, crew } = problem;
@@ -116,7 +116,7 @@ export async function compactMipAward(instance: Instance, options: CompactMipOpt
     const M = x.length;
     if (M > 0) m.row(-Infinity, M, [...x.map((col) => [col, 1] as const), [r, M]]);
     c.eligible.forEach((_, a) => {
-      const follows = new Set(c.successors[a]);
+      const follows = new Set(successorPositions(problem, c, a));
       for (let b = a + 1; b < M; b++) if (!follows.has(b)) m.row(-Infinity, 1, [[x[a]!, 1], [x[b]!, 1]]);
     });
     const credit = x.map((col, j) => [col, pairings[c.eligible[j]!]!.creditMinutes] as const);

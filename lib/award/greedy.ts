@@ -9,7 +9,7 @@ import type { Instance } from "../domain/index.ts";
 import { assembleAward, type Choice } from "./assemble.ts";
 import { extendAll, finish, start } from "../rules/index.ts";
 import { prepareProblem, scoreLine, type AwardProblem } from "./problem.ts";
-import { bestScores, HURRIED_NODES, priceLines } from "./pricing.ts";
+import { BEST_LINE_NODES, bestScores, HURRIED_NODES, priceLines } from "./pricing.ts";
 import type { AwardResult } from "./solve.ts";
 
 /** A tie-break per credit minute, far below the smallest wish weight that matters (0.8^49 ≈ 2e-5). */
@@ -35,7 +35,7 @@ export function greedyAward(instance: Instance, options: { nodeLimit?: number } 
   const nodeLimit = options.nodeLimit ?? 20_000;
   const problem = prepareProblem(instance);
   const t1 = performance.now();
-  const { best } = bestScores(problem, nodeLimit * 2);
+  const { best } = bestScores(problem, BEST_LINE_NODES);
   const t2 = performance.now();
   const choices = greedyChoices(problem, nodeLimit / 4);
   const assembled = assembleAward(problem, choices, best);

@@ -254,21 +254,7 @@ export class Master {
     };
   }
 
-  private readonly pinned: number[] = [];
-
-  /** Pins master column k: 1 (the line is taken) or 0 (forbidden), until release(). */
-  pin(k: number, value: 0 | 1): void {
-    const col = this.colIndex[k]!;
-    this.model.changeColBounds(col, value, value === 1 ? Infinity : 0);
-    this.pinned.push(col);
-  }
-
-  /** Undoes every pin. */
-  release(): void {
-    for (const col of this.pinned.splice(0)) this.model.changeColBounds(col, 0, Infinity);
-  }
-
-  /** Turns the LP's surplus off (diving needs exact cover) or back on. */
+  /** Turns the LP's surplus off (the integer solve needs exact cover) or back on. */
   surplusAllowed(on: boolean): void {
     if (!on) {
       if (this.savedSurplus) return; // already off

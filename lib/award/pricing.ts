@@ -30,7 +30,7 @@ import type { Wish } from "../domain/index.ts";
 import { matchesTripSelection, periodWeekends, rankWeight } from "../domain/index.ts";
 import { daysBetween } from "../domain/time.ts";
 import { extendAll, finish, start, type LineState } from "../rules/index.ts";
-import { scoreLine, type AwardProblem, type CrewProblem } from "./problem.ts";
+import { scoreLine, successorPositions, type AwardProblem, type CrewProblem } from "./problem.ts";
 
 export interface PriceRequest {
   /** weight of the line's score in its value (0: legality and costs only) */
@@ -206,16 +206,23 @@ function scoreAlone(problem: AwardProblem, c: CrewProblem): Float64Array {
 
 /** The best legal lines of one crew member under `request`. */
 export function priceLines(problem: AwardProblem, c: CrewProblem, request: PriceRequest): PriceResult {
-  const { eligible, successors } = c;
+  const { eligible, position } = c;
+  const next = problem.next;
   const m = eligible.length;
   const allowed = request.allowed;
   const usable = Uint8Array.from(eligible, (k) => (allowed && !allowed(k) ? 0 : 1));
   const gain = Float64Array.from(eligible, (k) => -request.cost[k]!);
+  // The usable positions, last first (a pool of a few trips makes the whole search small).
+  const backwards: number[] = [];
+  for (let j = m - 1; j >= 0; j--) if (usable[j]) backwards.push(j);
   // after[j]: the best Σ gain of a chain that follows position j (0: stop there).
   const after = new Float64Array(m);
-  for (let j = m - 1; j >= 0; j--) {
+  for (const j of backwards) {
     let best = 0;
-    for (const s of successors[j]!) if (usable[s] && gain[s]! + after[s]! > best) best = gain[s]! + after[s]!;
+    for (const b of next[eligible[j]!]!) {
+      const s = position[b]!;
+      if (s >= 0 && usable[s] && gain[s]! + after[s]! > best) best = gain[s]! + after[s]!;
+    }
     after[j] = best;
   }
   // Best gain per credit minute and per period day at positions ≥ j (positive gains only).
@@ -225,22 +232,35 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
     const k = eligible[j]!;
     const g = usable[j] ? Math.max(0, gain[j]!) : 0;
     perCredit[j] = Math.max(perCredit[j + 1]!, g / Math.max(1, problem.pairings[k]!.creditMinutes));
-    perDay[j] = Math.max(perDay[j + 1]!, g / Math.max(1, problem.periodDays[k]!.length));
+    perDay[j] = Math.max(perDay[j + 1]!, g / Math.max(1, problem.dutyDays[k]!.length));
   }
   const ahead = (chain: number, from: number, creditUsed: number, daysUsed: number) =>
     Math.min(chain, (problem.maxCreditMinutes - creditUsed) * perCredit[from]!, (c.maxWorkedDays - daysUsed) * perDay[from]!);
   let rootChain = 0;
-  for (let j = 0; j < m; j++) if (usable[j] && gain[j]! + after[j]! > rootChain) rootChain = gain[j]! + after[j]!;
+  for (const j of backwards) if (gain[j]! + after[j]! > rootChain) rootChain = gain[j]! + after[j]!;
+  // reach[j]: the most credit a chain after position j can add (below the credit maximum a line must reach its minimum).
+  const minCredit = problem.minCreditMinutes;
+  const reach = new Float64Array(m);
+  if (minCredit > 0) {
+    for (const j of backwards) {
+      let most = 0;
+      for (const b of next[eligible[j]!]!) {
+        const s = position[b]!;
+        if (s >= 0 && usable[s]) most = Math.max(most, problem.pairings[b]!.creditMinutes + reach[s]!);
+      }
+      reach[j] = most;
+    }
+  }
   // Children are tried best first: the chain value of the duals, plus what the
   // trip alone does to the crew member's score (a guide for the order only).
   const alone = request.scoreWeight > 0 ? scoreAlone(problem, c) : undefined;
   const key = Float64Array.from(eligible, (_, j) => gain[j]! + after[j]! + (alone ? request.scoreWeight * alone[j]! : 0));
   const order = (js: readonly number[]) => js.filter((j) => usable[j]).sort((a, b) => key[b]! - key[a]! || a - b);
-  const rootChildren = order(eligible.map((_, j) => j));
+  const rootChildren = order(backwards);
   const childrenOf = new Map<number, number[]>();
   const children = (j: number) => {
     let known = childrenOf.get(j);
-    if (!known) childrenOf.set(j, (known = order(successors[j]!)));
+    if (!known) childrenOf.set(j, (known = order(successorPositions(problem, c, j))));
     return known;
   };
 
@@ -256,7 +276,21 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   };
 
   const path: number[] = [];
+  // Period days the path occupies (for wishes) and works on duty (for the days-off and days-on rules).
   const dayCount = new Uint16Array(problem.periodLength);
+  const dutyCount = new Uint16Array(problem.periodLength);
+  /** The longest run of duty days through `days` (a trip's) were they added: a run only lengthens as trips are added. */
+  const runWith = (days: readonly number[]) => {
+    let longest = 0;
+    for (const d of days) {
+      let lo = d;
+      let hi = d;
+      while (lo > 0 && (dutyCount[lo - 1]! > 0 || days.includes(lo - 1))) lo--;
+      while (hi < dutyCount.length - 1 && (dutyCount[hi + 1]! > 0 || days.includes(hi + 1))) hi++;
+      longest = Math.max(longest, hi - lo + 1);
+    }
+    return longest;
+  };
   let worked = 0;
   let credit = 0;
   let gainSum = 0;
@@ -316,13 +350,17 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
       const p = pairings[k]!;
       if (credit + p.creditMinutes > problem.maxCreditMinutes) continue;
       const days = problem.periodDays[k]!;
+      const onDuty = problem.dutyDays[k]!;
       let newDays = 0;
-      for (const d of days) if (dayCount[d] === 0) newDays++;
+      for (const d of onDuty) if (dutyCount[d] === 0) newDays++;
       if (worked + newDays > c.maxWorkedDays) continue;
+      if (credit + p.creditMinutes + reach[j]! < minCredit) continue;
+      if (onDuty.length > 0 && runWith(onDuty) > problem.maxDaysOn) continue;
       if (gainSum + gain[j]! + ahead(after[j]!, j + 1, credit + p.creditMinutes, worked + newDays) + scoreWeight * optimistic <= floor) continue;
       // push
       path.push(j);
       for (const d of days) dayCount[d]!++;
+      for (const d of onDuty) dutyCount[d]!++;
       worked += newDays;
       credit += p.creditMinutes;
       gainSum += gain[j]!;
@@ -332,6 +370,7 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
       gainSum -= gain[j]!;
       credit -= p.creditMinutes;
       worked -= newDays;
+      for (const d of onDuty) dutyCount[d]!--;
       for (const d of days) dayCount[d]!--;
       path.pop();
       states.length = path.length + 1;
@@ -358,6 +397,9 @@ function compareLines(a: readonly number[], b: readonly number[]): number {
 /** The best line-holder score of each crew member alone (0 when none is legal), and whether each search was exhaustive. */
 /** Searches of this many nodes stand in for the full ones once the caller's time is up. */
 export const HURRIED_NODES = 200;
+
+/** Search nodes for each crew member's best line alone, the same for every method so satisfactions compare. */
+export const BEST_LINE_NODES = 40_000;
 
 export function bestScores(
   problem: AwardProblem,

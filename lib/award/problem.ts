@@ -7,7 +7,7 @@
 import type { CrewMember, Instance, Pairing, Wish } from "../domain/index.ts";
 import { lineScore, type ScoreContext } from "../domain/index.ts";
 import { pairingDates } from "../domain/pairing-facts.ts";
-import { daysBetween, instantMs } from "../domain/time.ts";
+import { daysBetween, instantMs, localDatesTouched } from "../domain/time.ts";
 import { canFollow, checkLine, dutyRulesOnly, extendAll, requiredDaysOff, start, type EngineContext, type LineResult } from "../rules/index.ts";
 
 export interface CrewProblem {
@@ -19,8 +19,8 @@ export interface CrewProblem {
   wishes: readonly Wish[];
   /** pairing indices this crew member may fly, by report time */
   eligible: number[];
-  /** successors[k]: positions in `eligible` (after k) whose pairing may follow eligible[k] */
-  successors: number[][];
+  /** by pairing index: its position in `eligible`, −1 when not eligible */
+  position: Int32Array;
   /** the most base-local period dates a line may work (days-off rule), Infinity without one */
   maxWorkedDays: number;
 }
@@ -40,6 +40,17 @@ export interface AwardProblem {
   endMs: number[];
   /** per pairing: its base-local dates inside the period, as day numbers from the period's start */
   periodDays: number[][];
+  /**
+   * per pairing: the period days its duties touch (report to release) — what the
+   * days-off and days-on rules count; a layover day with no duty is not among them
+   */
+  dutyDays: number[][];
+  /**
+   * by pairing index: the pairings that may follow it in a line (report order),
+   * the same for the whole group — the network; a crew member's own network is
+   * this one restricted to their eligible pairings (see successorPositions)
+   */
+  next: Int32Array[];
   engine: EngineContext;
   score: ScoreContext;
   /** seniority order */
@@ -47,6 +58,8 @@ export interface AwardProblem {
   illegal: IllegalPairing[];
   /** the credit window's maximum, Infinity without one */
   maxCreditMinutes: number;
+  /** the longest run of worked days the days-on rule allows, Infinity without one */
+  maxDaysOn: number;
   /** the credit window's minimum for a line-holder line, 0 without one */
   minCreditMinutes: number;
   periodLength: number;
@@ -72,11 +85,10 @@ export function prepareProblem(instance: Instance): AwardProblem {
   const startMs = pairings.map((p) => instantMs(p.dutyPeriods[0]!.report));
   const endMs = pairings.map((p) => instantMs(p.dutyPeriods.at(-1)!.release));
   const periodLength = daysBetween(period.startDate, period.endDate) + 1;
-  const periodDays = pairings.map((p) =>
-    pairingDates(p, period.zone)
-      .map((date) => daysBetween(period.startDate, date))
-      .filter((d) => d >= 0 && d < periodLength),
-  );
+  const dayNumbers = (dates: Iterable<string>) =>
+    [...new Set(dates)].map((date) => daysBetween(period.startDate, date)).filter((d) => d >= 0 && d < periodLength).sort((a, b) => a - b);
+  const periodDays = pairings.map((p) => dayNumbers(pairingDates(p, period.zone)));
+  const dutyDays = pairings.map((p) => dayNumbers(p.dutyPeriods.flatMap((d) => localDatesTouched(d.report, d.release, period.zone))));
 
   // A pairing that breaks a duty or rest rule by itself, for a crew member
   // with no history, is illegal for everyone: reported and left open.
@@ -101,6 +113,8 @@ export function prepareProblem(instance: Instance): AwardProblem {
   const maxCreditMinutes = typeof maxCredit === "number" ? maxCredit : Infinity;
   const minCredit = creditRule?.params.minMinutes;
   const minCreditMinutes = typeof minCredit === "number" ? minCredit : 0;
+  const daysOnRule = ruleSet.rules.find((r) => (r.params.check ?? r.id) === "max-days-on");
+  const maxDaysOn = typeof daysOnRule?.params.days === "number" ? daysOnRule.params.days : Infinity;
   const hasDaysOff = ruleSet.rules.some((r) => (r.params.check ?? r.id) === "min-days-off");
   const maxWorkedDays = hasDaysOff ? periodLength - requiredDaysOff(ruleSet.rules, periodLength, false) : Infinity;
 
@@ -109,14 +123,16 @@ export function prepareProblem(instance: Instance): AwardProblem {
   // pairwise rules read nothing of a crew member but the base, which the whole
   // group shares (checks/min-rest.ts, no-overlap.ts, days-between-trips.ts).
   const P = pairings.length;
-  const follows = new Uint8Array(P * P);
+  const next: Int32Array[] = pairings.map(() => new Int32Array(0));
   const anyone = instance.crew[0];
   if (anyone) {
-    for (const a of order) {
-      if (need[a]! <= 0) continue;
-      for (const b of order) {
-        if (need[b]! > 0 && startMs[b]! >= endMs[a]! && canFollow(anyone, ruleSet, pairings[a]!, pairings[b]!, engine)) follows[a * P + b] = 1;
+    const live = order.filter((k) => need[k]! > 0);
+    for (const a of live) {
+      const after: number[] = [];
+      for (const b of live) {
+        if (startMs[b]! >= endMs[a]! && canFollow(anyone, ruleSet, pairings[a]!, pairings[b]!, engine)) after.push(b);
       }
+      next[a] = Int32Array.from(after);
     }
   }
   const sorted = [...instance.crew].sort((a, b) => a.seniority - b.seniority);
@@ -131,25 +147,29 @@ export function prepareProblem(instance: Instance): AwardProblem {
       // Legal on its own for this crew member: history, carry-in and fixed activities.
       return extendAll(fresh, { kind: "pairing", pairing: p }).violations.length === 0;
     });
-    const successors = eligible.map((a, i) => {
-      const next: number[] = [];
-      for (let j = i + 1; j < eligible.length; j++) {
-        const b = eligible[j]!;
-        if (follows[a * P + b] === 1) next.push(j);
-      }
-      return next;
-    });
+    const position = new Int32Array(P).fill(-1);
+    eligible.forEach((k, j) => (position[k] = j));
     return {
       crew: member,
       rank,
       weight: seniorityWeight(rank, n, settings.seniorityWeight, member.carriedWeight),
       wishes: instance.bids[member.id] ?? [],
       eligible,
-      successors,
+      position,
       maxWorkedDays,
     };
   });
-  return { instance, pairings, need, startMs, endMs, periodDays, engine, score, crew, illegal, maxCreditMinutes, minCreditMinutes, periodLength };
+  return { instance, pairings, need, startMs, endMs, periodDays, dutyDays, next, engine, score, crew, illegal, maxCreditMinutes, maxDaysOn, minCreditMinutes, periodLength };
+}
+
+/** The positions in `c.eligible` whose pairing may follow the one at position `j`, ascending. */
+export function successorPositions(problem: AwardProblem, c: CrewProblem, j: number): number[] {
+  const out: number[] = [];
+  for (const b of problem.next[c.eligible[j]!]!) {
+    const s = c.position[b]!;
+    if (s >= 0) out.push(s);
+  }
+  return out;
 }
 
 /** The score of a line-holder line of pairing indices for crew member `c` (lineScore, the one contract). */

@@ -26,7 +26,8 @@ import { assembleAward, type Assembled, type Choice } from "./assemble.ts";
 import { firstFitChoices, greedyChoices } from "./greedy.ts";
 import { loadHighs, Master, type MasterColumn, type SolveOutcome } from "./master.ts";
 import { prepareProblem, type AwardProblem } from "./problem.ts";
-import { bestScores, priceLines } from "./pricing.ts";
+import { BEST_LINE_NODES, bestScores, priceLines } from "./pricing.ts";
+import { improveByNeighbourhoods } from "./improve.ts";
 
 export type AwardPhase = "prepare" | "coverage" | "wishes" | "integer" | "done";
 
@@ -65,6 +66,8 @@ export interface AwardReport {
   gap: number;
   /** the integer solve is proven optimal over all legal lines */
   provenOptimal: boolean;
+  /** neighbourhoods re-solved after the integer solve (improve.ts), and how many improved the award */
+  neighbourhoods?: Record<"coverage" | "wishes", { tried: number; improved: number }>;
   illegalPairings: { pairingId: string; text: string }[];
   /** crew whose satisfaction fell below the fairness floor, and by how much */
   fairnessShortfalls: { crewId: string; shortfall: number }[];
@@ -93,8 +96,14 @@ const FAIRNESS_PENALTY = 100;
 
 class Clock {
   readonly times: Record<string, number> = {};
-  private readonly t0 = performance.now();
-  constructor(private readonly limitMs: number) {}
+  private t0 = performance.now();
+  constructor(private limitMs: number) {}
+  /** From now on, shares are of the time left (what preparing took is not shared out again). */
+  rebase(): void {
+    const now = performance.now();
+    this.limitMs = Math.max(0, this.limitMs - (now - this.t0));
+    this.t0 = now;
+  }
   phase<T>(name: string, run: () => T): T {
     const start = performance.now();
     try {
@@ -124,9 +133,13 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
   const roundLimit = settings.iterationLimit ?? Infinity;
   const warnings: string[] = [];
   const cancelled = () => options.shouldStop?.() === true;
-  // Shares of the time limit: column generation for coverage until 30 %, its
-  // integer solve until 40 %, for wishes until 75 %, the final integer solve the rest.
-  let share = 0.3;
+  // Shares of the time left once the first solutions stand (clock.rebase):
+  // column generation for coverage until 15 %, its integer solve until 20 %,
+  // covering by neighbourhoods until 40 %; for wishes until 50 %, the final
+  // integer solve until 55 %, improving it by neighbourhoods the rest.
+  // (Measured on generated L: a pricing round of column generation takes
+  // seconds there, while neighbourhoods cover and improve the most per second.)
+  let share = 0.15;
   const stop = () => cancelled() || clock.expired(share);
   const progress = (phase: AwardPhase, percent: number, message: string) => options.onProgress?.({ phase, percent, message });
   let stoppedBy: Stats["stoppedBy"] = "optimal";
@@ -140,13 +153,15 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
   const n = problem.crew.length;
   progress("prepare", 5, "Finding each crew member's best line alone");
   // Best lines alone and the greedy award may take up to 10 % and 15 % of the time; then they hurry.
-  const alone = clock.phase("best-lines", () => bestScores(problem, nodeLimit * 2, () => clock.expired(0.1)));
+  const alone = clock.phase("best-lines", () => bestScores(problem, BEST_LINE_NODES, () => clock.expired(0.1)));
   const best = alone.best;
   if (alone.exhausted.some((e) => !e)) {
     warnings.push(`best line alone not proven for ${alone.exhausted.filter((e) => !e).length} crew (search limit); satisfaction is measured against the best line found`);
   }
   const greedy = clock.phase("greedy", () => greedyChoices(problem, nodeLimit / 4, () => clock.expired(0.15)));
   if (cancelled()) throw new AppError("conflict", "the award run was cancelled");
+  // The shares below are of the time left once the first solutions stand.
+  clock.rebase();
 
   const highs = await loadHighs();
   const need = new Map<number, number>();
@@ -194,6 +209,8 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     fitColumns.forEach(addColumn);
 
     let rounds = 0;
+    let neighbourhoods = { tried: 0, improved: 0 };
+    let coverNeighbourhoods = { tried: 0, improved: 0 };
     let lastDuals: Float64Array = new Float64Array(0);
     let allExhausted = false;
 
@@ -210,16 +227,14 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     const generate = (
       from: number,
       to: number,
-      dive?: { fixed: ReadonlySet<number>; rounds: number },
     ): { lp: SolveOutcome; bound: number; exhausted: boolean } => {
       let bound = Infinity;
       let centre: Float64Array | undefined;
       let mode: "smooth" | "plain" | "deep" = "plain";
       for (let round = 0; ; round++) {
-        const lp = clock.phase(`${phase}-lp`, () => master.solveLp(clock.remainingSeconds(share), stop, dive !== undefined));
-        if (dive && (lp.status !== "optimal" || round >= dive.rounds)) return { lp, bound, exhausted: false };
+        const lp = clock.phase(`${phase}-lp`, () => master.solveLp(clock.remainingSeconds(share), stop));
         const y = master.duals();
-        if (!dive) lastDuals = y;
+        lastDuals = y;
         if (lp.status !== "optimal") {
           noteStop();
           return { lp, bound, exhausted: false };
@@ -236,7 +251,6 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
               exhausted = false;
               break;
             }
-            if (dive?.fixed.has(i)) continue;
             const yi = y[master.crewRow[i]!]!;
             const request = { scoreWeight: scoreWeight(i, at), cost, threshold: at[master.crewRow[i]!]! + TOL, maxLines: linesPerRound, nodeLimit: quickNodes };
             let r = priceLines(problem, c, request);
@@ -252,12 +266,12 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
           }
         });
         rounds++;
-        if (!dive && mode !== "smooth" && Number.isFinite(lagrangian) && lagrangian < bound) {
+        if (mode !== "smooth" && Number.isFinite(lagrangian) && lagrangian < bound) {
           bound = lagrangian;
           centre = y;
         }
         const fraction = Math.min(1, round / 30);
-        if (!dive) progress(phase, from + (to - from) * fraction, `${phase === "coverage" ? "Covering the trips" : "Granting wishes"}: round ${rounds}, ${master.columns.length} lines, LP ${lp.objective.toFixed(3)}`);
+        progress(phase, from + (to - from) * fraction, `${phase === "coverage" ? "Covering the trips" : "Granting wishes"}: round ${rounds}, ${master.columns.length} lines, LP ${lp.objective.toFixed(3)}`);
         if (rounds >= roundLimit) {
           stoppedBy = "iteration-limit";
           return { lp, bound, exhausted: false };
@@ -291,9 +305,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
 
     /** The integer solve, then closing the gap by enumerating every line within it; returns the chosen columns. */
     const integer = (bound: number, exhausted: boolean, given: readonly MasterColumn[] | undefined) => {
-      // A dive from the LP often beats the solution we came with; the better one starts the MIP.
-      const dived = clock.phase(`${phase}-dive`, () => diveWithPricing(clock.remainingSeconds(share) / 2));
-      const start = dived && feasible(dived) && (!given || value(dived) > value(given) + 1e-9) ? dived : given;
+      const start = given;
       let mip = clock.phase(`${phase}-mip`, () => master.solveMip(clock.remainingSeconds(share), stop, 1e-9, start));
       let proven = false;
       if (mip.status !== "optimal") noteStop();
@@ -352,72 +364,52 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       phase === "coverage"
         ? -coverageOf(cols) + tieBreak * cols.reduce((t, col) => t + wishCoefficient(col), 0)
         : cols.reduce((t, col) => t + wishCoefficient(col), 0);
-    /**
-     * Diving with re-pricing for an integer solution: pin the lines the LP
-     * holds at 1 (or else its largest fractional line), let column generation
-     * answer for the crew not yet pinned, and repeat; a pin that leaves the LP
-     * infeasible is undone and that line forbidden. Exact cover while diving
-     * (no surplus). Undone at the end: only the lines generated stay.
-     */
-    const diveWithPricing = (seconds: number): MasterColumn[] | undefined => {
-      const deadline = performance.now() + seconds * 1000;
-      const fixed = new Set<number>();
-      master.surplusAllowed(false);
-      try {
-        for (let step = 0; step < 3 * n + 10; step++) {
-          if (stop() || performance.now() > deadline) return undefined;
-          const { lp } = generate(0, 0, { fixed, rounds: 4 });
-          if (lp.status !== "optimal") return undefined;
-          const x = master.values();
-          const open = master.columns.map((col, k) => ({ col, k, x: x[k]! })).filter((e) => !fixed.has(e.col.crew) && e.x > 1e-6);
-          if (open.length === 0) break;
-          const whole = open.filter((e) => e.x > 1 - 1e-6);
-          const pins = whole.length ? whole : [open.reduce((a, b) => (b.x > a.x + 1e-9 ? b : a))];
-          for (const e of pins) {
-            master.pin(e.k, 1);
-            fixed.add(e.col.crew);
-          }
-          if (whole.length === 0) {
-            const check = master.solveLp(clock.remainingSeconds(share), stop, true);
-            if (check.status === "infeasible") {
-              master.release(); // re-pin what stood, forbid the last choice
-              const keep = [...fixed].filter((crew) => crew !== pins[0]!.col.crew);
-              fixed.clear();
-              for (const col of master.columns.map((c, k) => ({ c, k })).filter(({ c, k }) => keep.includes(c.crew) && x[k]! > 1 - 1e-6)) {
-                master.pin(col.k, 1);
-                fixed.add(col.c.crew);
-              }
-              master.pin(pins[0]!.k, 0);
-            }
-          }
-        }
-        master.solveLp(clock.remainingSeconds(share), stop, true);
-        const chosen = chosenColumns();
-        return feasible(chosen) ? chosen : undefined;
-      } finally {
-        master.release();
-        master.surplusAllowed(true);
-      }
-    };
     const chosenColumns = () => {
       const x = master.values();
       return master.columns.filter((_, k) => x[k]! > 0.5);
     };
 
-    // Phase 1: coverage.
+    // Phase 1: coverage. It starts from the better covering of the greedy award
+    // and the first fit; one that leaves nothing open is optimal already.
+    const startColumns = feasible(fitColumns) && value(fitColumns) > value(greedyColumns) ? fitColumns : greedyColumns;
+    const coveredAlready = feasible(startColumns) && [...openAfter(startColumns).values()].every((open) => open === 0);
     master.setCoverageObjective(openCost);
     master.setSurplusPenalty((p) => SURPLUS * openCost.get(p)!);
-    const cover = generate(10, 40);
+    const cover = coveredAlready ? undefined : generate(10, 40);
     // A lower bound on open credit: −(phase 1's upper bound), less the positions' share δ·P and
     // the wishes' tie-break (below δ/2).
-    const coverageLpBound = Number.isFinite(cover.bound) ? Math.max(0, -cover.bound - (totalPositions + 0.5) / (1 + totalPositions)) : 0;
+    const coverageLpBound = cover && Number.isFinite(cover.bound) ? Math.max(0, -cover.bound - (totalPositions + 0.5) / (1 + totalPositions)) : 0;
+    share = 0.2;
+    const cover1 = cover ? integer(cover.lp.objective, cover.exhausted, startColumns) : { proven: true, chosen: startColumns };
     share = 0.4;
-    // Phase 1 starts from the better covering of the greedy award and the first fit.
-    const startColumns = feasible(fitColumns) && value(fitColumns) > value(greedyColumns) ? fitColumns : greedyColumns;
-    const cover1 = integer(cover.lp.objective, cover.exhausted, startColumns);
+    const neighbourhoodInput = (start: MasterColumn[]) => ({
+      problem,
+      highs,
+      need,
+      openCost,
+      coefficient: wishCoefficient,
+      scoreWeight: (i: number, yf: number) => (best[i]! <= 0 ? 0 : (problem.crew[i]!.weight - yf) / best[i]!),
+      fullCoefficient: (i: number) => (best[i]! <= 0 ? 0 : problem.crew[i]!.weight),
+      reserve: { min: reserveMin, max: reserveMax },
+      start: [...start].sort((a, b) => a.crew - b.crew),
+      deadline: performance.now() + clock.remainingSeconds(share) * 1000,
+      stop: cancelled,
+      nodeLimit: quickNodes * 2,
+      // With an iteration limit a run does the same work on any machine: it bounds the neighbourhoods too.
+      ...(Number.isFinite(roundLimit) ? { maxTries: roundLimit } : {}),
+    });
+    if (!cover1.proven && [...openAfter(cover1.chosen).values()].some((open) => open > 0) && !stop()) {
+      progress("coverage", 38, "Covering open trips a few crew members at a time");
+      const better = clock.phase("coverage-neighbourhoods", () => improveByNeighbourhoods({ ...neighbourhoodInput(cover1.chosen), coverage: { tieBreak } }));
+      coverNeighbourhoods = { tried: better.tried, improved: better.improved };
+      if (better.improved > 0 && feasible(better.columns)) {
+        cover1.chosen = better.columns;
+        better.columns.forEach(addColumn); // phase 2's master must hold the coverage it is asked to keep
+      }
+    }
     // Phase 1's integer optimum, counted from the lines chosen (Σ c_p u_p).
     const coverage = coverageOf(cover1.chosen);
-    allExhausted = cover.exhausted;
+    allExhausted = cover?.exhausted ?? true;
 
     // Phase 2: wishes with the coverage kept.
     phase = "wishes";
@@ -429,12 +421,24 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       (col) => wishCoefficient(col),
       floor !== undefined ? { floor, penalty: FAIRNESS_PENALTY, coefficient: fairnessCoefficient, crewCount: n } : undefined,
     );
-    share = 0.75;
-    const wishes = generate(45, 85);
-    share = 1;
+    share = 0.5;
+    const wishes = generate(45, 75);
+    share = 0.55;
     allExhausted &&= wishes.exhausted;
-    progress("integer", 88, "Choosing one line per crew member");
+    progress("integer", 78, "Choosing one line per crew member");
     const final = integer(wishes.bound, wishes.exhausted, cover1.chosen);
+    share = 1;
+    if (!final.proven && !stop()) {
+      progress("integer", 88, "Improving the award a few crew members at a time");
+      const improvedAward = clock.phase("neighbourhoods", () =>
+        improveByNeighbourhoods({
+          ...neighbourhoodInput(final.chosen),
+          ...(floor !== undefined ? { fairness: { floor, penalty: FAIRNESS_PENALTY, coefficient: fairnessCoefficient } } : {}),
+        }),
+      );
+      neighbourhoods = { tried: improvedAward.tried, improved: improvedAward.improved };
+      if (improvedAward.improved > 0 && feasible(improvedAward.columns)) final.chosen = improvedAward.columns;
+    }
 
     // The award.
     const byCrew = new Map(final.chosen.map((col) => [col.crew, col]));
@@ -451,7 +455,10 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     const constant = problem.crew.reduce((t, c, i) => t + (best[i]! <= 0 ? c.weight : 0), 0);
     const penalty = fairnessShortfalls.reduce((t, s) => t + FAIRNESS_PENALTY * s.shortfall, 0);
     const objective = assembled.weightedSatisfaction - penalty;
-    const lpBound = Number.isFinite(wishes.bound) ? Math.max(objective, wishes.bound + constant) : Infinity;
+    // Every satisfaction is at most 1, so Σ_i W_i bounds the objective too (the weaker pricing bounds can exceed it).
+    const allSatisfied = problem.crew.reduce((t, c) => t + c.weight, 0);
+    const lpBound = Math.max(objective, Math.min(allSatisfied, wishes.bound + constant));
+    const everyoneAtBest = objective >= allSatisfied - 1e-9 * Math.max(1, allSatisfied);
     const gap = Number.isFinite(lpBound) ? (lpBound - objective) / Math.max(1, Math.abs(lpBound)) : Infinity;
     const y = lastDuals;
     const finalDuals = {
@@ -479,7 +486,8 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         objective,
         lpBound,
         gap,
-        provenOptimal: allExhausted && cover1.proven && final.proven,
+        provenOptimal: cover1.proven && ((everyoneAtBest && alone.exhausted.every(Boolean)) || (allExhausted && final.proven)),
+        neighbourhoods: { coverage: coverNeighbourhoods, wishes: neighbourhoods },
         illegalPairings: problem.illegal,
         fairnessShortfalls,
         best: Object.fromEntries(problem.crew.map((c, i) => [c.crew.id, best[i]!])),

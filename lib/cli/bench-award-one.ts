@@ -66,6 +66,8 @@ async function main(): Promise<void> {
       columns: stats.columns,
       rounds: stats.rounds,
       stoppedBy: stats.stoppedBy ?? null,
+      neighbourhoods: report.neighbourhoods ?? null,
+      times: stats.times,
       peakMB: process.resourceUsage().maxRSS / 1024,
     }),
   );

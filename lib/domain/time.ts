@@ -73,6 +73,12 @@ function wallMs(instant: string, zone: string): number {
   return ms + offsetAt(zoneOf(zone), ms) * MINUTE_MS;
 }
 
+/** Minutes after local midnight in `zone` of an instant given in epoch ms (seconds dropped). */
+export function minuteOfLocalDay(ms: number, zone: string): number {
+  const wall = ms + offsetAt(zoneOf(zone), ms) * MINUTE_MS;
+  return Math.floor((((wall % DAY_MS) + DAY_MS) % DAY_MS) / MINUTE_MS);
+}
+
 /** Whether `zone` is an IANA zone name the runtime knows. */
 export function isValidZone(zone: string): boolean {
   return IANAZone.isValidZone(zone);

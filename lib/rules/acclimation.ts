@@ -16,11 +16,23 @@ export interface Acclimation {
   zone: string;
 }
 
+const sameTheater = (a: number, b: number) => Math.abs(a - b) <= 60;
+
+/** Answers already given for a duties array (the rules of one engine step ask about the same array). */
+const known = new WeakMap<readonly Duty[], Map<number, Acclimation>>();
+
 /** Acclimation at the report of duties[k], walking the duties from the first. */
 export function acclimationAt(duties: readonly Duty[], k: number, env: RuleEnv): Acclimation {
+  let answers = known.get(duties);
+  if (!answers) known.set(duties, (answers = new Map()));
+  let found = answers.get(k);
+  if (!found) answers.set(k, (found = walk(duties, k, env)));
+  return found;
+}
+
+function walk(duties: readonly Duty[], k: number, env: RuleEnv): Acclimation {
   const station = (code: string | undefined) => (code ? env.stations.get(code) : undefined);
   const lonOf = (code: string) => station(code)?.longitude ?? station(env.crew.base)?.longitude ?? 0;
-  const sameTheater = (a: number, b: number) => Math.abs(a - b) <= 60;
   let acclimatedLon = lonOf(env.crew.base);
   let acclimatedZone = env.zone;
   let here = env.crew.base;

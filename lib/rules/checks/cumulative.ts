@@ -22,6 +22,35 @@ const params = z
     message: "give one of windowHours, windowDays or calendarYear",
   });
 
+/** Daily totals by date with running sums, made once per crew's map. */
+const sums = new WeakMap<ReadonlyMap<string, number>, { dates: string[]; before: Float64Array }>();
+
+/** Σ of the daily totals dated from `first` to `last` (inclusive). */
+function dailySum(daily: ReadonlyMap<string, number>, first: string, last: string): number {
+  let known = sums.get(daily);
+  if (!known) {
+    const dates = [...daily.keys()].sort();
+    const before = new Float64Array(dates.length + 1);
+    dates.forEach((date, k) => (before[k + 1] = before[k]! + daily.get(date)!));
+    known = { dates, before };
+    sums.set(daily, known);
+  }
+  // the first index whose date is ≥ `date`
+  const lowerBound = (date: string) => {
+    let lo = 0;
+    let hi = known.dates.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (known.dates[mid]! < date) lo = mid + 1;
+      else hi = mid;
+    }
+    return lo;
+  };
+  const from = lowerBound(first);
+  const to = last < first ? from : lowerBound(`${last}\uffff`);
+  return known.before[to]! - known.before[from]!;
+}
+
 const label = { fdp: "flight duty", duty: "duty", flight: "flight time" } as const;
 
 /**
@@ -49,7 +78,7 @@ export const cumulative: RuleImpl<z.infer<typeof params>> = {
       // Calendar days: flight time by the base-local date of each duty's report.
       const last = dutyDates(d, env.zone).report;
       const first = p.calendarYear ? `${last.slice(0, 4)}-01-01` : addDays(last, -(p.windowDays! - 1));
-      for (const [date, minutes] of dailyFlight) if (date >= first && date <= last) total += minutes;
+      total += dailySum(dailyFlight, first, last);
       for (const x of duties) {
         if (x.source.kind === "look-back") continue; // already in the daily totals
         const date = dutyDates(x, env.zone).report;

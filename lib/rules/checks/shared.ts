@@ -1,6 +1,6 @@
 /** Small helpers the rule implementations share. */
 import { z } from "zod";
-import { localTime } from "../../domain/time.ts";
+import { minuteOfLocalDay } from "../../domain/time.ts";
 import { describeSource, type Duty } from "../duty.ts";
 
 export const MINUTE = 60_000;
@@ -37,6 +37,5 @@ export function longestFree(duties: readonly Duty[], from: number, to: number): 
 
 /** Minutes after local midnight of an instant (epoch ms) in `zone`. */
 export function minuteOfDay(ms: number, zone: string): number {
-  const [h, m] = localTime(new Date(ms).toISOString(), zone).split(":").map(Number) as [number, number];
-  return h * 60 + m;
+  return minuteOfLocalDay(ms, zone);
 }
