@@ -119,6 +119,9 @@ export function BidEditor(props: Props) {
 
   const save = useCallback(async (): Promise<boolean> => {
     const s = state.current;
+    // This save sends the latest wishes: a retry or debounce still waiting (say, from before the connection came back) would only repeat it.
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = null;
     if (s.blocked) return false;
     if (s.inFlight) {
       s.again = true;
