@@ -215,6 +215,55 @@ test("a second device editing the same bid sees a conflict with both versions, a
   }
 });
 
+test("changes made offline are kept on the phone and reach the server when it is back, on the same page or on the next load", async ({ page, context }) => {
+  test.setTimeout(60_000);
+  const status = page.locator("[data-save-status]");
+  // "Nothing saved yet." is revision 0.
+  const revisionOf = async (p: Page) => Number((await p.locator('[data-save-status="saved"]').innerText()).match(/revision (\d+)/)?.[1] ?? 0);
+  await signIn(page, "dev@larkfield.test");
+  await expect(page).toHaveURL(/\/trips$/);
+  await page.goto("/bid");
+  await expect(status).toHaveAttribute("data-save-status", "saved");
+  const before = await sentences(page);
+  const rev = await revisionOf(page);
+
+  // Same page: offline, a wish, then the connection comes back.
+  await context.setOffline(true);
+  await addWish(page, "Trips to avoid", () => page.getByLabel("Report before").fill("07:00"));
+  await expect(status).toHaveAttribute("data-save-status", "offline");
+  await expect(status).toHaveText("No connection: your changes are kept on this phone and will be saved when it is back.");
+  const first = [...before, "Keep me off trips reporting before 07:00"];
+  expect(await sentences(page)).toEqual(first);
+  await context.setOffline(false);
+  await saved(page);
+  expect(await revisionOf(page)).toBe(rev + 1);
+  // Past the editor's 5 s retry of the failed save: the save made on reconnecting was the only one.
+  await page.waitForTimeout(5_500);
+  await expect(status).toHaveAttribute("data-save-status", "saved");
+  expect(await revisionOf(page)).toBe(rev + 1);
+  await page.reload();
+  expect(await sentences(page)).toEqual(first);
+  expect(await revisionOf(page)).toBe(rev + 1);
+
+  // Next load: offline, a wish, the page closed; a new page online restores the copy and saves it.
+  await context.setOffline(true);
+  await addWish(page, "Work pattern", () => page.getByLabel("At most this many days on in a row").fill("5"));
+  await expect(status).toHaveAttribute("data-save-status", "offline");
+  await page.close();
+  await context.setOffline(false);
+  const next = await context.newPage();
+  await next.goto("/bid");
+  const second = [...first, "At most 5 days on in a row"];
+  await expect(next.getByRole("status").filter({ hasText: "kept on this phone" })).toHaveText("Changes kept on this phone while it was offline are being saved now.");
+  await saved(next);
+  expect(await revisionOf(next)).toBe(rev + 2);
+  expect(await next.evaluate(() => Object.keys(localStorage).filter((k) => k.startsWith("bidwright:draft:")))).toEqual([]);
+  await next.reload();
+  expect(await sentences(next)).toEqual(second);
+  expect(await revisionOf(next)).toBe(rev + 2);
+  await expect(next.getByRole("status").filter({ hasText: "kept on this phone" })).toHaveCount(0);
+});
+
 test("another crew member's bid is not reachable by its address", async ({ page }) => {
   expect(versionUrl).toMatch(/^\/bid\/versions\//);
   await signIn(page, "sam@larkfield.test");
