@@ -14,6 +14,12 @@ const envSchema = z.object({
   NEXTAUTH_URL: z.url("NEXTAUTH_URL must be a URL such as http://localhost:3000").optional(),
   /** set by `npm run demo`: the demo sign-ins the sign-in page lists */
   BIDWRIGHT_DEMO_ACCOUNTS: z.string().optional(),
+  /**
+   * The browser tests' clock: an instant the server's clock starts at when the
+   * process starts (it runs on from there), so a seeded period's deadline
+   * stays ahead of "now" whatever day the tests run. Unset everywhere else.
+   */
+  BIDWRIGHT_CLOCK_START: z.iso.datetime({ message: "BIDWRIGHT_CLOCK_START must be a UTC instant such as 2026-12-01T12:00:00Z" }).optional(),
   PORT: z.coerce.number().int().min(1).max(65535).default(3000),
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
 });

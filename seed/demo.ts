@@ -2,7 +2,8 @@
  * The demo's data, written once into an empty database: a generated month at
  * Halvern for captains and first officers (64 crew and about 240 trips),
  * bidding open until the 20th, with the generated bids of the other crew
- * already in and the demo crew accounts' own bids left for the visitor.
+ * already in and the demo crew accounts' own bids left for the visitor; the
+ * month before holds a bid each demo crew account submitted there.
  */
 import type { Db } from "../lib/db/client.ts";
 import { importBundle } from "../lib/db/period-import.ts";
@@ -10,6 +11,7 @@ import { daysBetween } from "../lib/domain/time.ts";
 import { STATIONS } from "./carrier.ts";
 import { DEMO_PASSWORD, demoUsers, writeUsers, type UserSeed } from "./demo-users.ts";
 import { generatePeriod } from "./generator/generate-period.ts";
+import { writePastPeriod } from "./past-period.ts";
 import { nextPeriod } from "./small-scenario.ts";
 
 export const DEMO_BASE = "HLV";
@@ -43,7 +45,9 @@ export async function seedDemoIfEmpty(prisma: Db, now = new Date()): Promise<{ s
   // The visitor builds the demo accounts' bids themselves.
   const mine = new Set(users.flatMap((u) => (u.crewId ? [u.crewId] : [])));
   for (const instance of bundle.instances) for (const id of mine) delete instance.bids[id];
-  await importBundle(prisma, bundle, { state: "open", opensAt: window.opensAt, deadline: window.deadline });
+  const { periodId } = await importBundle(prisma, bundle, { state: "open", opensAt: window.opensAt, deadline: window.deadline });
   await writeUsers(prisma, users);
+  // Last month's bids of the demo accounts, so "start from my last bid" can be tried.
+  await writePastPeriod(prisma, periodId, [...mine]);
   return { seeded: true, users };
 }

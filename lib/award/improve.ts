@@ -125,7 +125,13 @@ export function improveByNeighbourhoods(input: ImproveInput): ImproveResult {
   const before = valueOf(columns);
   let tried = 0;
   let improved = 0;
-  const out = () => tried >= (input.maxTries ?? Infinity) || performance.now() > input.deadline || input.stop();
+  // At the largest size the seeded draws never run out, so a long enough run of
+  // neighbourhoods without a gain ends the search (the award is then stuck at
+  // a local optimum that more of the same will not leave).
+  let sinceGain = 0;
+  const patience = Math.max(30, n);
+  const out = () =>
+    tried >= (input.maxTries ?? Infinity) || (size >= largest && sinceGain >= patience) || performance.now() > input.deadline || input.stop();
 
   /** Who holds each pairing now, and its open positions. */
   const holders = () => {
@@ -156,10 +162,12 @@ export function improveByNeighbourhoods(input: ImproveInput): ImproveResult {
     if (seen.has(key)) return false;
     seen.add(key);
     tried++;
+    sinceGain++;
     const better = solveNeighbourhood(group);
     if (!better) return false;
     group.forEach((i, s) => (columns[i] = better[s]!));
     improved++;
+    sinceGain = 0;
     return true;
   };
   /** Crew close to `anchor` in seniority, for room to pass trips on. */

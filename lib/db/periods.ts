@@ -2,25 +2,10 @@
 import { db } from "./client";
 import type { BidPeriodState } from "./generated/enums";
 import type { SessionUser } from "./users";
-import { layoverStations, pairingSchema, tripFacts } from "../domain/index";
+import { pairingSchema, tripSummary, type TripSummary } from "../domain/index";
 import { pairingFromRow } from "./pairing-rows";
 
-export interface TripSummary {
-  code: string;
-  /** base-local dates of the first report and the last release */
-  startDate: string;
-  endDate: string;
-  days: number;
-  layovers: string[];
-  creditMinutes: number;
-  blockMinutes: number;
-  /** base-local clock times */
-  report: string;
-  release: string;
-  legs: number;
-  deadheads: number;
-  redEye: boolean;
-}
+export type { TripSummary } from "../domain/index";
 
 export interface OpenPeriodView {
   id: string;
@@ -62,24 +47,7 @@ export async function openPeriodForCrew(user: SessionUser): Promise<OpenPeriodVi
   const trips = period.pairings
     .map((row) => pairingSchema.parse(pairingFromRow(row, crew.base.stationCode)))
     .filter((p) => (p.crewNeeded[crew.position] ?? 0) > 0)
-    .map((p): TripSummary => {
-      const facts = tripFacts(p, zone);
-      const legs = p.dutyPeriods.flatMap((d) => d.legs);
-      return {
-        code: p.id,
-        startDate: facts.dates[0]!,
-        endDate: facts.dates[facts.dates.length - 1]!,
-        days: facts.dates.length,
-        layovers: layoverStations(p),
-        creditMinutes: p.creditMinutes,
-        blockMinutes: p.blockMinutes,
-        report: facts.reportTime,
-        release: facts.releaseTime,
-        legs: legs.length,
-        deadheads: legs.filter((l) => l.deadhead).length,
-        redEye: facts.redEye,
-      };
-    });
+    .map((p) => tripSummary(p, zone));
   return {
     id: period.id,
     name: period.name,

@@ -1,0 +1,48 @@
+// The demo's data, written by the same function `npm run demo` and
+// `npm run db:reset` call: the open month and, before it, a month holding a
+// bid each demo crew account submitted, so "start from my last bid" is there.
+import { createHash } from "node:crypto";
+import { canonicalize as independentJcs } from "json-canonicalize";
+import { beforeAll, describe, expect, inject, it } from "vitest";
+import { db } from "@/lib/db/client";
+import { copyPreviousBid, loadBid, previousBid } from "@/lib/db/bids";
+import { checkCredentials, type SessionUser } from "@/lib/db/users";
+import { seedDemoIfEmpty } from "@/seed/demo";
+import { DEMO_PASSWORD } from "@/seed/demo-users";
+import { truncateAll } from "../support/reset";
+
+const NOW = new Date("2026-12-01T12:00:00Z");
+let crew: SessionUser[] = [];
+
+describe("the demo seed", () => {
+  beforeAll(async () => {
+    await truncateAll(inject("databaseUrl"));
+    const { users } = await seedDemoIfEmpty(db(), NOW);
+    crew = await Promise.all(users.filter((u) => u.role === "crew").map(async (u) => (await checkCredentials(u.email, DEMO_PASSWORD))!));
+  }, 120_000);
+
+  it("holds the month before the open one, closed, at the same base, with a submitted bid for every demo crew account", async () => {
+    const periods = await db().bidPeriod.findMany({ orderBy: { startDate: "asc" }, include: { submissions: { include: { crewMember: true } } } });
+    expect(periods.map((p) => [p.name, p.state])).toEqual([["December 2026", "closed"], ["January 2027", "open"]]);
+    expect(periods[0]!.baseId).toBe(periods[1]!.baseId);
+    expect(crew).toHaveLength(3);
+    const past = periods[0]!;
+    expect(past.submissions.map((s) => s.crewMemberId).sort()).toEqual(crew.map((u) => u.crewMemberId).sort());
+    // The receipt hash, re-computed with an independent RFC 8785 implementation (npm json-canonicalize).
+    for (const s of past.submissions) {
+      const content = { crewId: s.crewMember.employeeNumber, periodId: past.id, wishes: s.wishes };
+      expect(s.hash).toBe(createHash("sha256").update(independentJcs(content)).digest("hex"));
+    }
+  });
+
+  it("offers that bid to each demo crew account, and copying it keeps what carries over", async () => {
+    const user = crew[0]!;
+    const view = await loadBid(user);
+    expect(view.draft.revision).toBe(0);
+    expect((await previousBid(view.scope))?.periodName).toBe("December 2026");
+    const copied = await copyPreviousBid(user, { periodId: view.scope.period.id, baseRevision: 0 }, NOW);
+    expect(copied).toMatchObject({ status: "saved", copied: 4, draft: { revision: 1 } });
+    expect(copied.leftBehind).toEqual(["wish 2: free days named last period's dates", "wish 5: it named last period's trips (T105)"]);
+    expect((await loadBid(user)).draft.wishes.map((w) => w.kind)).toEqual(["trip", "no-trip", "rhythm", "credit"]);
+  });
+});
