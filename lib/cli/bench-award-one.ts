@@ -65,7 +65,8 @@ async function main(): Promise<void> {
       gap: Number.isFinite(report.gap) ? report.gap : null,
       columns: stats.columns,
       rounds: stats.rounds,
-      stoppedBy: stats.stoppedBy ?? null,
+      // "optimal" only when proven; a search that ended by itself short of a proof says so.
+      stoppedBy: report.provenOptimal ? "optimal" : stats.stoppedBy === "optimal" ? "search ended" : (stats.stoppedBy ?? null),
       neighbourhoods: report.neighbourhoods ?? null,
       times: stats.times,
       peakMB: process.resourceUsage().maxRSS / 1024,
