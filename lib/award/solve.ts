@@ -25,9 +25,10 @@ import { AppError } from "../domain/index.ts";
 import { assembleAward, type Assembled, type Choice } from "./assemble.ts";
 import { firstFitChoices, greedyChoices } from "./greedy.ts";
 import { loadHighs, Master, type MasterColumn, type SolveOutcome } from "./master.ts";
-import { prepareProblem, type AwardProblem } from "./problem.ts";
+import { prepareProblem, scoreLine, type AwardProblem } from "./problem.ts";
 import { BEST_LINE_NODES, bestScores, priceLines } from "./pricing.ts";
 import { improveByNeighbourhoods } from "./improve.ts";
+import { compactMipAward } from "./compact-mip.ts";
 
 export type AwardPhase = "prepare" | "coverage" | "wishes" | "integer" | "done";
 
@@ -76,7 +77,7 @@ export interface AwardReport {
   /** W_i per crew id */
   weights: Record<string, number>;
   warnings: string[];
-  /** the duals of the last master LP of phase 2, for audits (reduced profit = coefficient·score − crew − Σ pairings) */
+  /** the duals of the last master LP of phase 2, for audits (absent when phase 2 had nothing to do: everyone held their best line) (reduced profit = coefficient·score − crew − Σ pairings) */
   finalDuals?: { crew: Record<string, number>; pairings: Record<string, number>; scoreCoefficient: Record<string, number> };
 }
 
@@ -87,6 +88,9 @@ export interface AwardResult {
 }
 
 const TOL = 1e-7;
+/** groups up to this many crew × pairings are also solved with the compact model, for up to COMPACT_SECONDS */
+const COMPACT_SIZE = 3_000;
+const COMPACT_SECONDS = 30;
 /** Wentges smoothing weight of the dual centre */
 const SMOOTHING = 0.5;
 /** LP penalty per unit of over-cover, in units of the pairing's own open-time cost (phase 1) */
@@ -207,6 +211,26 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       .phase("first-fit", () => firstFitChoices(problem))
       .map((g, i): MasterColumn => ({ crew: i, pairings: g.pairings, reserve: g.reserve, score: g.score }));
     fitColumns.forEach(addColumn);
+    // A small group is also solved with the compact model (compact-mip.ts): on
+    // the published bases it reaches every crew member's best line in seconds,
+    // where the neighbourhoods stall at a local optimum. Its lines are legal
+    // (repaired and re-checked there) and scored exactly, so they join the
+    // master as one more first solution.
+    let compactColumns: MasterColumn[] | undefined;
+    if (n * problem.pairings.length <= COMPACT_SIZE && !cancelled()) {
+      const seconds = Math.min(COMPACT_SECONDS, clock.remainingSeconds(0.2));
+      const started = performance.now();
+      const compact = await compactMipAward(instance, { timeLimitSeconds: seconds, shouldStop: cancelled });
+      clock.times.compact = performance.now() - started;
+      const crewIndex = new Map(problem.crew.map((c, i) => [c.crew.id, i]));
+      const pairingIndex = new Map(problem.pairings.map((p, k) => [p.id, k]));
+      compactColumns = compact.award.lines.map((line): MasterColumn => {
+        const i = crewIndex.get(line.crewId)!;
+        const pairings = line.pairings.map((id) => pairingIndex.get(id)!).sort((a, b) => problem.startMs[a]! - problem.startMs[b]! || a - b);
+        return line.kind === "reserve" ? { crew: i, pairings: [], reserve: true, score: 0 } : { crew: i, pairings, reserve: false, score: scoreLine(problem, problem.crew[i]!, pairings) };
+      }).sort((a, b) => a.crew - b.crew);
+      compactColumns.forEach(addColumn);
+    }
 
     let rounds = 0;
     let neighbourhoods = { tried: 0, improved: 0 };
@@ -371,7 +395,10 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
 
     // Phase 1: coverage. It starts from the better covering of the greedy award
     // and the first fit; one that leaves nothing open is optimal already.
-    const startColumns = feasible(fitColumns) && value(fitColumns) > value(greedyColumns) ? fitColumns : greedyColumns;
+    const startColumns = [fitColumns, ...(compactColumns ? [compactColumns] : [])].reduce(
+      (bestSoFar, cols) => (feasible(cols) && value(cols) > value(bestSoFar) + 1e-9 ? cols : bestSoFar),
+      greedyColumns,
+    );
     const coveredAlready = feasible(startColumns) && [...openAfter(startColumns).values()].every((open) => open === 0);
     master.setCoverageObjective(openCost);
     master.setSurplusPenalty((p) => SURPLUS * openCost.get(p)!);
@@ -421,14 +448,18 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       (col) => wishCoefficient(col),
       floor !== undefined ? { floor, penalty: FAIRNESS_PENALTY, coefficient: fairnessCoefficient, crewCount: n } : undefined,
     );
+    const wishStart = compactColumns && feasible(compactColumns) && value(compactColumns) > value(cover1.chosen) + 1e-9 ? compactColumns : cover1.chosen;
+    // A start that gives everyone their best line alone cannot be beaten: phase 2 has nothing to do.
+    const reachable = problem.crew.reduce((t, c, i) => t + (best[i]! > 0 ? c.weight : 0), 0);
+    const atBest = value(wishStart) >= reachable - 1e-9 * Math.max(1, reachable);
     share = 0.5;
-    const wishes = generate(45, 75);
+    const wishes = atBest ? { bound: reachable, exhausted: false } : generate(45, 75);
     share = 0.55;
     allExhausted &&= wishes.exhausted;
     progress("integer", 78, "Choosing one line per crew member");
-    const final = integer(wishes.bound, wishes.exhausted, cover1.chosen);
+    const final: { proven: boolean; chosen: MasterColumn[] } = atBest ? { proven: false, chosen: wishStart } : integer(wishes.bound, wishes.exhausted, wishStart);
     share = 1;
-    if (!final.proven && !stop()) {
+    if (!atBest && !final.proven && !stop()) {
       progress("integer", 88, "Improving the award a few crew members at a time");
       const improvedAward = clock.phase("neighbourhoods", () =>
         improveByNeighbourhoods({
@@ -493,7 +524,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         best: Object.fromEntries(problem.crew.map((c, i) => [c.crew.id, best[i]!])),
         weights: Object.fromEntries(problem.crew.map((c) => [c.crew.id, c.weight])),
         warnings,
-        finalDuals,
+        ...(atBest ? {} : { finalDuals }),
       },
     };
   } finally {
