@@ -131,9 +131,11 @@ export function improveByNeighbourhoods(input: ImproveInput): ImproveResult {
   let sinceGain = 0;
   const patience = Math.max(30, n);
   const out = () =>
-    tried >= (input.maxTries ?? Infinity) || (size >= largest && sinceGain >= patience) || performance.now() > input.deadline || input.stop();
+    tried >= (input.maxTries ?? Infinity) || (size >= largest && sinceGain >= patience) || halt();
+  /** Time up or cancelled: what may interrupt a neighbourhood's own solves. */
+  const halt = () => performance.now() > input.deadline || input.stop();
 
-  /** Who holds each pairing now, and its open positions. */
+  /** Who holds each pairing now. */
   const holders = () => {
     const held = new Map<number, number[]>();
     columns.forEach((col, i) => col.pairings.forEach((p) => held.set(p, [...(held.get(p) ?? []), i])));
@@ -279,7 +281,7 @@ export function improveByNeighbourhoods(input: ImproveInput): ImproveResult {
       const until = Math.min(input.deadline, performance.now() + STEP_MS);
       const remaining = () => Math.max(0.01, (until - performance.now()) / 1000);
       for (let round = 0; round < ROUNDS; round++) {
-        const lp = master.solveLp(remaining(), () => out(), true);
+        const lp = master.solveLp(remaining(), halt, true);
         if (lp.status !== "optimal") break;
         const y = master.duals();
         const cost = new Float64Array(problem.pairings.length);
@@ -292,9 +294,9 @@ export function improveByNeighbourhoods(input: ImproveInput): ImproveResult {
           const r = priceLines(problem, problem.crew[i]!, { scoreWeight: weight, cost, threshold: yi + TOL, maxLines: LINES, nodeLimit, allowed: (p) => pool.has(p) });
           for (const line of r.lines) if (add({ crew: s, pairings: line.pairings, reserve: false, score: line.score })) added++;
         });
-        if (added === 0 || out()) break;
+        if (added === 0 || halt()) break;
       }
-      const mip = master.solveMip(remaining(), () => out(), 1e-9, current);
+      const mip = master.solveMip(remaining(), halt, 1e-9, current);
       if (mip.status !== "optimal" && mip.status !== "time-limit" && mip.status !== "interrupted") return undefined;
       const x = master.values();
       const chosen = master.columns.filter((_, k) => x[k]! > 0.5);
