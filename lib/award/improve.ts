@@ -246,16 +246,14 @@ export function improveByNeighbourhoods(input: ImproveInput): ImproveResult {
     for (const col of columns) for (const p of col.pairings) covered.set(p, (covered.get(p) ?? 0) + 1);
     const subNeed = new Map<number, number>();
     for (const i of group) for (const p of columns[i]!.pairings) subNeed.set(p, (subNeed.get(p) ?? 0) + 1);
-    for (const [p, d] of need) {
-      const open = d - (covered.get(p) ?? 0);
-      if (open > 0) subNeed.set(p, (subNeed.get(p) ?? 0) + open);
-    }
-    const pool = new Set(subNeed.keys());
     let openNow = 0;
     for (const [p, d] of need) {
       const open = d - (covered.get(p) ?? 0);
-      if (open > 0) openNow += openCost.get(p)! * open;
+      if (open <= 0) continue;
+      subNeed.set(p, (subNeed.get(p) ?? 0) + open);
+      openNow += openCost.get(p)! * open;
     }
+    const pool = new Set(subNeed.keys());
     const reservesOutside = columns.filter((col, i) => col.reserve && !inGroup.has(i)).length;
     const master = new Master(input.highs, group.length, subNeed, {
       min: Math.max(0, input.reserve.min - reservesOutside),

@@ -238,19 +238,6 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
     Math.min(chain, (problem.maxCreditMinutes - creditUsed) * perCredit[from]!, (c.maxWorkedDays - daysUsed) * perDay[from]!);
   let rootChain = 0;
   for (const j of backwards) if (gain[j]! + after[j]! > rootChain) rootChain = gain[j]! + after[j]!;
-  // reach[j]: the most credit a chain after position j can add (below the credit maximum a line must reach its minimum).
-  const minCredit = problem.minCreditMinutes;
-  const reach = new Float64Array(m);
-  if (minCredit > 0) {
-    for (const j of backwards) {
-      let most = 0;
-      for (const b of next[eligible[j]!]!) {
-        const s = position[b]!;
-        if (s >= 0 && usable[s]) most = Math.max(most, problem.pairings[b]!.creditMinutes + reach[s]!);
-      }
-      reach[j] = most;
-    }
-  }
   // Children are tried best first: the chain value of the duals, plus what the
   // trip alone does to the crew member's score (a guide for the order only).
   const alone = request.scoreWeight > 0 ? scoreAlone(problem, c) : undefined;
@@ -354,7 +341,6 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
       let newDays = 0;
       for (const d of onDuty) if (dutyCount[d] === 0) newDays++;
       if (worked + newDays > c.maxWorkedDays) continue;
-      if (credit + p.creditMinutes + reach[j]! < minCredit) continue;
       if (onDuty.length > 0 && runWith(onDuty) > problem.maxDaysOn) continue;
       if (gainSum + gain[j]! + ahead(after[j]!, j + 1, credit + p.creditMinutes, worked + newDays) + scoreWeight * optimistic <= floor) continue;
       // push

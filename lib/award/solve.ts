@@ -67,7 +67,7 @@ export interface AwardReport {
   gap: number;
   /** the integer solve is proven optimal over all legal lines */
   provenOptimal: boolean;
-  /** neighbourhoods re-solved after the integer solve (improve.ts), and how many improved the award */
+  /** neighbourhoods re-solved after each phase's integer solve (improve.ts), and how many improved the award */
   neighbourhoods?: Record<"coverage" | "wishes", { tried: number; improved: number }>;
   illegalPairings: { pairingId: string; text: string }[];
   /** crew whose satisfaction fell below the fairness floor, and by how much */
@@ -77,7 +77,11 @@ export interface AwardReport {
   /** W_i per crew id */
   weights: Record<string, number>;
   warnings: string[];
-  /** the duals of the last master LP of phase 2, for audits (absent when phase 2 had nothing to do: everyone held their best line) (reduced profit = coefficient·score − crew − Σ pairings) */
+  /**
+   * the duals of the last master LP of phase 2, for audits (reduced profit =
+   * coefficient·score − crew − Σ pairings); absent when phase 2 had nothing to
+   * do because everyone held their best line
+   */
   finalDuals?: { crew: Record<string, number>; pairings: Record<string, number>; scoreCoefficient: Record<string, number> };
 }
 
@@ -248,17 +252,13 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
      * none prices at the current duals (quick, then deep), which alone can end
      * the phase and which alone yields bounds.
      */
-    const generate = (
-      from: number,
-      to: number,
-    ): { lp: SolveOutcome; bound: number; exhausted: boolean } => {
+    const generate = (from: number, to: number): { lp: SolveOutcome; bound: number; exhausted: boolean } => {
       let bound = Infinity;
       let centre: Float64Array | undefined;
       let mode: "smooth" | "plain" | "deep" = "plain";
       for (let round = 0; ; round++) {
         const lp = clock.phase(`${phase}-lp`, () => master.solveLp(clock.remainingSeconds(share), stop));
-        const y = master.duals();
-        lastDuals = y;
+        const y = (lastDuals = master.duals());
         if (lp.status !== "optimal") {
           noteStop();
           return { lp, bound, exhausted: false };
@@ -328,8 +328,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     };
 
     /** The integer solve, then closing the gap by enumerating every line within it; returns the chosen columns. */
-    const integer = (bound: number, exhausted: boolean, given: readonly MasterColumn[] | undefined) => {
-      const start = given;
+    const integer = (bound: number, exhausted: boolean, start: readonly MasterColumn[] | undefined) => {
       let mip = clock.phase(`${phase}-mip`, () => master.solveMip(clock.remainingSeconds(share), stop, 1e-9, start));
       let proven = false;
       if (mip.status !== "optimal") noteStop();
@@ -393,8 +392,9 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       return master.columns.filter((_, k) => x[k]! > 0.5);
     };
 
-    // Phase 1: coverage. It starts from the better covering of the greedy award
-    // and the first fit; one that leaves nothing open is optimal already.
+    // Phase 1: coverage. It starts from the best covering of the greedy award,
+    // the first fit and the compact model's award; one that leaves nothing open
+    // is optimal already.
     const startColumns = [fitColumns, ...(compactColumns ? [compactColumns] : [])].reduce(
       (bestSoFar, cols) => (feasible(cols) && value(cols) > value(bestSoFar) + 1e-9 ? cols : bestSoFar),
       greedyColumns,
