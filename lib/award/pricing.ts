@@ -30,6 +30,7 @@ import type { Wish } from "../domain/index.ts";
 import { matchesTripSelection, periodWeekends, rankWeight } from "../domain/index.ts";
 import { daysBetween } from "../domain/time.ts";
 import { extendAll, finish, start, type LineState } from "../rules/index.ts";
+import { chainAfter, chainBound, nowScore } from "./chain-bound.ts";
 import { scoreLine, successorPositions, type AwardProblem, type CrewProblem } from "./problem.ts";
 
 export interface PriceRequest {
@@ -45,6 +46,8 @@ export interface PriceRequest {
   nodeLimit: number;
   /** pairings that may be used (by pairing index); all eligible ones when absent */
   allowed?: (pairing: number) => boolean;
+  /** subgradient steps tuning the chain bound's multipliers (chain-bound.ts; default 4) */
+  boundSteps?: number;
 }
 
 export interface PricedLine {
@@ -216,15 +219,9 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   const backwards: number[] = [];
   for (let j = m - 1; j >= 0; j--) if (usable[j]) backwards.push(j);
   // after[j]: the best Σ gain of a chain that follows position j (0: stop there).
-  const after = new Float64Array(m);
-  for (const j of backwards) {
-    let best = 0;
-    for (const b of next[eligible[j]!]!) {
-      const s = position[b]!;
-      if (s >= 0 && usable[s] && gain[s]! + after[s]! > best) best = gain[s]! + after[s]!;
-    }
-    after[j] = best;
-  }
+  const after = chainAfter(problem, c, gain, usable);
+  // The Lagrangian chain bound (chain-bound.ts): far tighter where duals and wishes pull apart.
+  const chain = chainBound(problem, c, gain, usable, request.scoreWeight, request.threshold, request.boundSteps ?? 4);
   // Best gain per credit minute and per period day at positions ≥ j (positive gains only).
   const perCredit = new Float64Array(m + 1);
   const perDay = new Float64Array(m + 1);
@@ -241,7 +238,7 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   // Children are tried best first: the chain value of the duals, plus what the
   // trip alone does to the crew member's score (a guide for the order only).
   const alone = request.scoreWeight > 0 ? scoreAlone(problem, c) : undefined;
-  const key = Float64Array.from(eligible, (_, j) => gain[j]! + after[j]! + (alone ? request.scoreWeight * alone[j]! : 0));
+  const key = Float64Array.from(eligible, (_, j) => chain.step(j, -10) + chain.suffix[j]! + (alone ? 1e-9 * alone[j]! : 0));
   const order = (js: readonly number[]) => js.filter((j) => usable[j]).sort((a, b) => key[b]! - key[a]! || a - b);
   const rootChildren = order(backwards);
   const childrenOf = new Map<number, number[]>();
@@ -304,7 +301,11 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
     nodes++;
     const bounds = scoreWeight > 0 ? wishBounds(problem, c, path, dayCount, credit, from) : undefined;
     const optimistic = bounds?.ahead ?? 0;
-    if (gainSum + ahead(chainAfter, from, credit, worked) + scoreWeight * optimistic <= floor) return Infinity;
+    // The chain bound's base at this node: what the line so far is worth to it.
+    const base = gainSum + scoreWeight * nowScore(problem, c, path, dayCount, credit, chain.theta) - chain.kappa * credit - chain.mu * worked + chain.constant;
+    const lastDay = path.length ? chain.lastDay[path.at(-1)!]! : -10;
+    const chained = path.length ? base + chain.suffix[path.at(-1)!]! : chain.root;
+    if (Math.min(chained, gainSum + ahead(chainAfter, from, credit, worked) + scoreWeight * optimistic) <= floor) return Infinity;
     // The path itself as a line (below the credit minimum it cannot be legal).
     const here = bounds?.here ?? 0;
     if (credit >= problem.minCreditMinutes && gainSum + scoreWeight * here > floor) {
@@ -323,7 +324,8 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
         const j = next[x]!;
         const k = eligible[j]!;
         const b = gainSum + gain[j]! + ahead(after[j]!, j + 1, credit + pairings[k]!.creditMinutes, worked) + scoreWeight * optimistic;
-        if (b > frontier) frontier = b;
+        const bc = base + chain.step(j, lastDay) + chain.suffix[j]!;
+        if (Math.min(b, bc) > frontier) frontier = Math.min(b, bc);
       }
     };
     for (let index = 0; index < next.length; index++) {
@@ -343,6 +345,7 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
       if (worked + newDays > c.maxWorkedDays) continue;
       if (onDuty.length > 0 && runWith(onDuty) > problem.maxDaysOn) continue;
       if (gainSum + gain[j]! + ahead(after[j]!, j + 1, credit + p.creditMinutes, worked + newDays) + scoreWeight * optimistic <= floor) continue;
+      if (base + chain.step(j, lastDay) + chain.suffix[j]! <= floor) continue;
       // push
       path.push(j);
       for (const d of days) dayCount[d]!++;
@@ -372,7 +375,7 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
 
   // Every line not returned was pruned below the floor (≤ the threshold or the best found) or lies in an unsearched subtree.
   const best = found[0]?.value ?? -Infinity;
-  return { lines: found, upperBound: Math.max(best, request.threshold, stopped ? frontier : -Infinity), exhausted: !stopped, nodes };
+  return { lines: found, upperBound: Math.min(chain.root, Math.max(best, request.threshold, stopped ? frontier : -Infinity)), exhausted: !stopped, nodes };
 }
 
 function compareLines(a: readonly number[], b: readonly number[]): number {
