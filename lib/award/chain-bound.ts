@@ -64,7 +64,17 @@ interface Compiled {
   freshLoss: Float64Array;
   /** per position: duty days inside the period */
   dutyCount: Int32Array;
+  /** each wish compiled for nowScore, in rank order */
+  parts: Part[];
 }
+
+type Part =
+  | { kind: "trip"; weight: number; trip: number }
+  | { kind: "no-trip"; weight: number; selects: Uint8Array }
+  | { kind: "free-days"; weight: number; days: number[]; named: number }
+  | { kind: "rhythm"; weight: number; maxDaysOn: number | undefined; weekends: number[][] | undefined }
+  | { kind: "credit"; weight: number; maxMinutes: number | undefined }
+  | { kind: "constant"; weight: number };
 
 const compiledByCrew = new WeakMap<CrewProblem, Compiled>();
 
@@ -96,8 +106,30 @@ function compile(problem: AwardProblem, c: CrewProblem): Compiled {
   weekends.forEach((w, index) => w.forEach((d) => d >= 0 && d < L && (weekendOf[d] = index)));
   let weekendLoss = 0;
   let emptyScore = baseLineValue;
+  const parts: Part[] = [];
+  const inPeriod = (d: number) => d >= 0 && d < L;
   c.wishes.forEach((wish: Wish, rank) => {
     const weight = rankWeight(rank, rankDecay);
+    switch (wish.kind) {
+      case "trip":
+        parts.push({ kind: "trip", weight, trip: trips.length });
+        break;
+      case "no-trip":
+        parts.push({ kind: "no-trip", weight, selects: Uint8Array.from(eligible, (k) => (matchesTripSelection(wish, problem.pairings[k]!, zone) ? 1 : 0)) });
+        break;
+      case "free-days":
+        parts.push({ kind: "free-days", weight, days: wish.dates.map((date) => daysBetween(periodStart, date)).filter(inPeriod), named: wish.dates.length });
+        break;
+      case "rhythm":
+        parts.push({ kind: "rhythm", weight, maxDaysOn: wish.maxDaysOn, weekends: wish.weekendsOff === true ? weekends.map((w) => w.filter(inPeriod)) : undefined });
+        break;
+      case "credit":
+        parts.push({ kind: "credit", weight, maxMinutes: wish.maxMinutes });
+        break;
+      case "buddy":
+        parts.push({ kind: "constant", weight: problem.score.buddyLine ? weight : 0 });
+        break;
+    }
     switch (wish.kind) {
       case "trip":
         trips.push({ weight, count: wish.count, selects: Uint8Array.from(eligible, (k) => (matchesTripSelection(wish, problem.pairings[k]!, zone) ? 1 : 0)) });
@@ -136,28 +168,30 @@ function compile(problem: AwardProblem, c: CrewProblem): Compiled {
     freshLoss[j] = loss;
     dutyCount[j] = problem.dutyDays[k]!.length;
   }
-  const compiled: Compiled = { firstDay, lastDay, fromDay, tail, trips, dayLoss, weekendOf, weekendLoss, emptyScore, freshLoss, dutyCount };
+  const compiled: Compiled = { firstDay, lastDay, fromDay, tail, trips, dayLoss, weekendOf, weekendLoss, emptyScore, freshLoss, dutyCount, parts };
   compiledByCrew.set(c, compiled);
   return compiled;
 }
 
 /** For a monotone network: the first successor position of each position (m when none); undefined otherwise. */
 function monotoneTails(problem: AwardProblem, c: CrewProblem): Int32Array | undefined {
-  const { eligible, position } = c;
+  const tails = problem.tails;
+  if (!tails) return undefined;
+  const { eligible } = c;
   const m = eligible.length;
+  const ranks = Int32Array.from(eligible, (k) => tails.rank[k]!);
   const tail = new Int32Array(m);
-  // A position's successors must be exactly the positions from its first successor on.
   for (let j = 0; j < m; j++) {
-    let first = m;
-    let count = 0;
-    for (const b of problem.next[eligible[j]!]!) {
-      const s = position[b]!;
-      if (s < 0) continue;
-      if (s < first) first = s;
-      count++;
+    // The first position whose rank is at least the first successor's (positions are in rank order).
+    const want = tails.first[eligible[j]!]!;
+    let lo = j + 1;
+    let hi = m;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (ranks[mid]! < want) lo = mid + 1;
+      else hi = mid;
     }
-    if (count !== m - first) return undefined;
-    tail[j] = first;
+    tail[j] = lo;
   }
   return tail;
 }
@@ -289,11 +323,14 @@ function chainPass(
   const constant = (kappa > 0 ? kappa * maxC : kappa < 0 ? kappa * minC : 0) + (mu > 0 ? mu * maxW : 0);
   // fresh[b]: what b adds with all of its days new.
   const fresh = new Float64Array(m);
-  for (let b = 0; b < m; b++) {
+  const list: number[] = [];
+  for (let b = 0; b < m; b++) if (usable[b]) list.push(b);
+  for (const b of list) {
     let bonus = 0;
-    cc.trips.forEach((t, r) => {
+    for (let r = 0; r < cc.trips.length; r++) {
+      const t = cc.trips[r]!;
       if (t.selects[b]) bonus += (t.weight * (1 - theta[r]!)) / t.count;
-    });
+    }
     fresh[b] = gain[b]! - kappa * credit[b]! - mu * cc.dutyCount[b]! + sw * (bonus - cc.freshLoss[b]!);
   }
   const dutyDays = problem.dutyDays;
@@ -301,7 +338,7 @@ function chainPass(
   const eligible = c.eligible;
   /** What b's value regains when the previous trip's last day is `last` (a day or weekend already counted). */
   const regain = (b: number, last: number): number => {
-    if (last < 0 || last >= problem.periodLength) return 0;
+    if (last < 0 || last >= problem.periodLength || cc.firstDay[b]! > last + 1) return 0;
     const k = eligible[b]!;
     let r = 0;
     const days = periodDays[k]!;
@@ -318,8 +355,40 @@ function chainPass(
   const bestFrom = new Float64Array(m + 1).fill(-Infinity);
   const bestAt = new Int32Array(m + 1).fill(-1);
   const tail = cc.tail;
-  for (let j = m - 1; j >= 0; j--) {
-    if (usable[j]) {
+  if (tail && list.length * list.length <= 8 * m) {
+    // A small pool of usable trips (a neighbourhood's): arc by arc over the pool alone.
+    let after = -Infinity; // best fresh + suffix over the pool from the current index on
+    let afterAt = -1;
+    for (let x = list.length - 1; x >= 0; x--) {
+      const j = list[x]!;
+      const last = cc.lastDay[j]!;
+      let value = 0;
+      let chosen = -1;
+      for (let y = x + 1; y < list.length; y++) {
+        const b = list[y]!;
+        if (b < tail[j]!) continue;
+        const v = step(b, last) + suffix[b]!;
+        if (v > value) {
+          value = v;
+          chosen = b;
+        }
+      }
+      suffix[j] = value;
+      choice[j] = chosen;
+      if (fresh[j]! + value > after) {
+        after = fresh[j]! + value;
+        afterAt = j;
+      }
+    }
+    bestFrom[0] = after;
+    bestAt[0] = afterAt;
+  } else {
+    for (let j = m - 1; j >= 0; j--) {
+      if (!usable[j]) {
+        bestFrom[j] = bestFrom[j + 1]!;
+        bestAt[j] = bestAt[j + 1]!;
+        continue;
+      }
       let value = 0;
       let chosen = -1;
       const last = cc.lastDay[j]!;
@@ -360,9 +429,6 @@ function chainPass(
         bestFrom[j] = bestFrom[j + 1]!;
         bestAt[j] = bestAt[j + 1]!;
       }
-    } else {
-      bestFrom[j] = bestFrom[j + 1]!;
-      bestAt[j] = bestAt[j + 1]!;
     }
   }
   let thetaPart = 0;
@@ -384,63 +450,59 @@ function chainPass(
  */
 export function nowScore(problem: AwardProblem, c: CrewProblem, path: readonly number[], dayCount: ArrayLike<number>, credit: number, theta: Float64Array): number {
   const cc = compile(problem, c);
-  const { rankDecay, baseLineValue } = problem.instance.settings;
-  let score = baseLineValue;
-  let tripIndex = 0;
-  c.wishes.forEach((wish, rank) => {
-    const weight = rankWeight(rank, rankDecay);
-    switch (wish.kind) {
+  let score = problem.instance.settings.baseLineValue;
+  for (const part of cc.parts) {
+    const { weight } = part;
+    switch (part.kind) {
       case "trip": {
-        const t = cc.trips[tripIndex]!;
-        const th = theta[tripIndex]!;
-        tripIndex++;
+        const t = cc.trips[part.trip]!;
+        const th = theta[part.trip]!;
         let held = 0;
         for (const j of path) held += t.selects[j]!;
         score += weight * (th + ((1 - th) * held) / t.count);
-        return;
+        break;
       }
       case "no-trip": {
-        const { zone } = problem.score;
-        const heldOne = path.some((j) => matchesTripSelection(wish, problem.pairings[c.eligible[j]!]!, zone));
-        score += heldOne ? 0 : weight;
-        return;
+        let heldOne = false;
+        for (const j of path) if (part.selects[j]) heldOne = true;
+        if (!heldOne) score += weight;
+        break;
       }
       case "free-days": {
         let worked = 0;
-        for (const date of wish.dates) {
-          const d = daysBetween(problem.score.periodStart, date);
-          if (d >= 0 && d < problem.periodLength && dayCount[d]! > 0) worked++;
-        }
-        score += (weight * (wish.dates.length - worked)) / wish.dates.length;
-        return;
+        for (const d of part.days) if (dayCount[d]! > 0) worked++;
+        score += (weight * (part.named - worked)) / part.named;
+        break;
       }
       case "rhythm": {
-        const parts: number[] = [];
-        if (wish.maxDaysOn !== undefined) {
+        let sum = 0;
+        let count = 0;
+        if (part.maxDaysOn !== undefined) {
           let run = 0;
           let longest = 0;
           for (let d = 0; d < problem.periodLength; d++) {
             run = dayCount[d]! > 0 ? run + 1 : 0;
             if (run > longest) longest = run;
           }
-          parts.push(longest <= wish.maxDaysOn ? 1 : wish.maxDaysOn / longest);
+          sum += longest <= part.maxDaysOn ? 1 : part.maxDaysOn / longest;
+          count++;
         }
-        if (wish.weekendsOff === true) {
-          const weekends = periodWeekends(problem.score.periodStart, problem.score.periodEnd);
+        if (part.weekends) {
           let free = 0;
-          for (const w of weekends) if (w.every((date) => !(dayCount[daysBetween(problem.score.periodStart, date)]! > 0))) free++;
-          parts.push(weekends.length === 0 ? 1 : free / weekends.length);
+          for (const w of part.weekends) if (w.every((d) => !(dayCount[d]! > 0))) free++;
+          sum += part.weekends.length === 0 ? 1 : free / part.weekends.length;
+          count++;
         }
-        score += parts.length === 0 ? weight : (weight * parts.reduce((s, x) => s + x, 0)) / parts.length;
-        return;
+        score += count === 0 ? weight : (weight * sum) / count;
+        break;
       }
       case "credit":
-        score += wish.maxMinutes !== undefined && credit > wish.maxMinutes ? (weight * wish.maxMinutes) / credit : weight;
-        return;
-      case "buddy":
-        score += problem.score.buddyLine ? weight : 0;
-        return;
+        score += part.maxMinutes !== undefined && credit > part.maxMinutes ? (weight * part.maxMinutes) / credit : weight;
+        break;
+      case "constant":
+        score += weight;
+        break;
     }
-  });
+  }
   return score;
 }

@@ -235,10 +235,12 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
     Math.min(chain, (problem.maxCreditMinutes - creditUsed) * perCredit[from]!, (c.maxWorkedDays - daysUsed) * perDay[from]!);
   let rootChain = 0;
   for (const j of backwards) if (gain[j]! + after[j]! > rootChain) rootChain = gain[j]! + after[j]!;
-  // Children are tried best first: the chain value of the duals, plus what the
-  // trip alone does to the crew member's score (a guide for the order only).
   const alone = request.scoreWeight > 0 ? scoreAlone(problem, c) : undefined;
-  const key = Float64Array.from(eligible, (_, j) => chain.step(j, -10) + chain.suffix[j]! + (alone ? 1e-9 * alone[j]! : 0));
+  // Children are tried best first: the chain bound's value of the trip and what can follow it, plus half
+  // of what the trip alone does to the crew member's score (a guide for the order only: measured on the
+  // benchmark's month, this order finds positive lines within far fewer nodes than either part alone).
+  const key = new Float64Array(m);
+  for (const j of backwards) key[j] = chain.step(j, -10) + chain.suffix[j]! + (alone ? 0.5 * request.scoreWeight * alone[j]! : 0);
   const order = (js: readonly number[]) => js.filter((j) => usable[j]).sort((a, b) => key[b]! - key[a]! || a - b);
   const rootChildren = order(backwards);
   const childrenOf = new Map<number, number[]>();

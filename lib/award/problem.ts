@@ -51,6 +51,13 @@ export interface AwardProblem {
    * this one restricted to their eligible pairings (see successorPositions)
    */
   next: Int32Array[];
+  /**
+   * when every pairing's successors are all the pairings of report order from
+   * its first successor on (a "monotone" network: the pairwise rules are
+   * minimum rests and gaps), each pairing's rank in report order and the rank
+   * of its first successor (the count of pairings when it has none); else undefined
+   */
+  tails?: { rank: Int32Array; first: Int32Array };
   engine: EngineContext;
   score: ScoreContext;
   /** seniority order */
@@ -135,6 +142,7 @@ export function prepareProblem(instance: Instance): AwardProblem {
       next[a] = Int32Array.from(after);
     }
   }
+  const tails = monotoneTails(order.filter((k) => need[k]! > 0), next, P);
   const sorted = [...instance.crew].sort((a, b) => a.seniority - b.seniority);
   const n = sorted.length;
   const crew = sorted.map((member, rank): CrewProblem => {
@@ -159,7 +167,23 @@ export function prepareProblem(instance: Instance): AwardProblem {
       maxWorkedDays,
     };
   });
-  return { instance, pairings, need, startMs, endMs, periodDays, dutyDays, next, engine, score, crew, illegal, maxCreditMinutes, maxDaysOn, minCreditMinutes, periodLength };
+  return { instance, pairings, need, startMs, endMs, periodDays, dutyDays, next, ...(tails ? { tails } : {}), engine, score, crew, illegal, maxCreditMinutes, maxDaysOn, minCreditMinutes, periodLength };
+}
+
+/** The ranks behind AwardProblem.tails, or undefined when some pairing's successors are not a tail of report order. */
+function monotoneTails(live: readonly number[], next: readonly Int32Array[], P: number): AwardProblem["tails"] {
+  const rank = new Int32Array(P).fill(-1);
+  live.forEach((k, r) => (rank[k] = r));
+  const first = new Int32Array(P).fill(live.length);
+  for (const a of live) {
+    const after = next[a]!;
+    if (after.length === 0) continue;
+    const r = rank[after[0]!]!;
+    if (after.length !== live.length - r) return undefined;
+    for (let x = 0; x < after.length; x++) if (rank[after[x]!] !== r + x) return undefined;
+    first[a] = r;
+  }
+  return { rank, first };
 }
 
 /** The positions in `c.eligible` whose pairing may follow the one at position `j`, ascending. */

@@ -57,10 +57,12 @@ describe("the chain bound of line generation", { timeout: 120_000 }, () => {
           const cost = Float64Array.from(problem.pairings, () => (rand() - 0.45) * 2);
           const scoreWeight = trial === 0 ? 0 : rand() * 3;
           const value = (line: readonly number[], score: number) => scoreWeight * score - line.reduce((t, k) => t + cost[k]!, 0);
-          const legal = oracle.lines.filter((l) => l.creditMinutes >= problem.minCreditMinutes);
+          // Every third trial prices within a pool of trips (as a neighbourhood does).
+          const pool = trial % 3 === 2 ? new Set(problem.pairings.flatMap((_, k) => (rand() < 0.6 ? [k] : []))) : undefined;
+          const legal = oracle.lines.filter((l) => l.creditMinutes >= problem.minCreditMinutes && (!pool || l.pairings.every((k) => pool.has(k))));
           const best = legal.reduce((b, l) => Math.max(b, value(l.pairings, l.score)), -Infinity);
           const gain = Float64Array.from(c.eligible, (k) => -cost[k]!);
-          const usable = new Uint8Array(c.eligible.length).fill(1);
+          const usable = Uint8Array.from(c.eligible, (k) => (!pool || pool.has(k) ? 1 : 0));
           // Half the trials tune the multipliers hard (no target), half gently (towards the best line).
           const bound = chainBound(problem, c, gain, usable, scoreWeight, trial % 2 ? -Infinity : best, trial % 2 ? 12 : 4);
           compared++;
@@ -94,7 +96,7 @@ describe("the chain bound of line generation", { timeout: 120_000 }, () => {
             }
           }
           // The search with the bound still finds the true best line and proves it.
-          const r = priceLines(problem, c, { scoreWeight, cost, threshold: -Infinity, maxLines: 1, nodeLimit: 1_000_000 });
+          const r = priceLines(problem, c, { scoreWeight, cost, threshold: -Infinity, maxLines: 1, nodeLimit: 1_000_000, ...(pool ? { allowed: (k: number) => pool.has(k) } : {}) });
           const found = r.lines[0]?.value ?? -Infinity;
           if (!r.exhausted || Math.abs(found - best) > 1e-9) problems.push(`seed ${spec.seed} ${c.crew.id}: pricing found ${found} (exhausted ${r.exhausted}), the enumeration ${best}`);
           if (r.upperBound < best - 1e-9) problems.push(`seed ${spec.seed} ${c.crew.id}: pricing's upper bound ${r.upperBound} below ${best}`);
