@@ -210,6 +210,10 @@ export interface ChainBound {
   step: (b: number, last: number) => number;
   /** each position's last period day (−2 when it has none inside the period): the `last` of `step` */
   lastDay: Int32Array;
+  /** step(b, last) ≤ step(b, −10) + regainMax for every b and last */
+  regainMax: number;
+  /** the first successor position of each position in a monotone network, else undefined */
+  tail: Int32Array | undefined;
   kappa: number;
   mu: number;
   /** θ per trip wish, in the order of the crew member's trip wishes */
@@ -437,7 +441,10 @@ function chainPass(
   const root = sw * (cc.emptyScore + thetaPart) + constant + rootChain;
   const chain: number[] = [];
   for (let j = bestFrom[0]! > 0 ? bestAt[0]! : -1; j >= 0; j = choice[j]!) chain.push(j);
-  return { bound: { root, suffix, step, lastDay: cc.lastDay, kappa, mu, theta: Float64Array.from(theta), constant }, chain };
+  let maxDayLoss = 0;
+  for (const x of cc.dayLoss) if (x > maxDayLoss) maxDayLoss = x;
+  const regainMax = Math.max(0, mu) + Math.max(0, sw) * (maxDayLoss + cc.weekendLoss);
+  return { bound: { root, suffix, step, lastDay: cc.lastDay, regainMax, tail: cc.tail, kappa, mu, theta: Float64Array.from(theta), constant }, chain };
 }
 
 /**

@@ -243,10 +243,27 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   for (const j of backwards) key[j] = chain.step(j, -10) + chain.suffix[j]! + (alone ? 0.5 * request.scoreWeight * alone[j]! : 0);
   const order = (js: readonly number[]) => js.filter((j) => usable[j]).sort((a, b) => key[b]! - key[a]! || a - b);
   const rootChildren = order(backwards);
-  const childrenOf = new Map<number, number[]>();
+  // Each list of children comes with boundFrom[x]: the most any child from index x on can add to the
+  // node's chain base — step(j, −10) + suffix[j] + regainMax — so the walk over it stops once that
+  // cannot beat the floor. In a monotone network a position's children are the root's list from
+  // chain.tail[j] on, already in order.
+  const withBounds = (list: number[]) => {
+    const boundFrom = new Float64Array(list.length + 1).fill(-Infinity);
+    for (let x = list.length - 1; x >= 0; x--) {
+      const j = list[x]!;
+      boundFrom[x] = Math.max(boundFrom[x + 1]!, chain.step(j, -10) + chain.suffix[j]! + chain.regainMax);
+    }
+    return { list, boundFrom };
+  };
+  const tail = chain.tail;
+  const root = withBounds(rootChildren);
+  const childrenOf = new Map<number, { list: number[]; boundFrom: Float64Array }>();
   const children = (j: number) => {
     let known = childrenOf.get(j);
-    if (!known) childrenOf.set(j, (known = order(successorPositions(problem, c, j))));
+    if (!known) {
+      const list = tail ? rootChildren.filter((b) => b >= tail[j]!) : order(successorPositions(problem, c, j));
+      childrenOf.set(j, (known = withBounds(list)));
+    }
     return known;
   };
 
@@ -319,11 +336,12 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
         if (finish(state).legal) admit({ pairings: path.map((j) => eligible[j]!), score, value });
       }
     }
-    const next = path.length === 0 ? rootChildren : children(path.at(-1)!);
+    const { list: next, boundFrom } = path.length === 0 ? root : children(path.at(-1)!);
     // What the unvisited children from index `from` on could reach (a bound; days ahead are not charged).
     const rest = (fromIndex: number) => {
       for (let x = fromIndex; x < next.length; x++) {
         const j = next[x]!;
+        if (base + boundFrom[x]! <= frontier) break;
         const k = eligible[j]!;
         const b = gainSum + gain[j]! + ahead(after[j]!, j + 1, credit + pairings[k]!.creditMinutes, worked) + scoreWeight * optimistic;
         const bc = base + chain.step(j, lastDay) + chain.suffix[j]!;
@@ -332,6 +350,7 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
     };
     for (let index = 0; index < next.length; index++) {
       const j = next[index]!;
+      if (base + boundFrom[index]! <= floor) break;
       if (nodes >= nodeLimit) {
         stopped = true;
         rest(index);
