@@ -95,6 +95,8 @@ const TOL = 1e-7;
 /** groups up to this many crew × pairings are also solved with the compact model, for up to COMPACT_SECONDS */
 const COMPACT_SIZE = 3_000;
 const COMPACT_SECONDS = 30;
+/** a last round of pricing, before column generation gives up on proving the LP optimum, searches this many times deeper */
+const DEEPER = 10;
 /** Wentges smoothing weight of the dual centre */
 const SMOOTHING = 0.5;
 /** LP penalty per unit of over-cover, in units of the pairing's own open-time cost (phase 1) */
@@ -222,6 +224,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     // master as one more first solution.
     let compactColumns: MasterColumn[] | undefined;
     if (n * problem.pairings.length <= COMPACT_SIZE && !cancelled()) {
+      progress("prepare", 8, "A small group: solving it whole with the compact model as well");
       const seconds = Math.min(COMPACT_SECONDS, clock.remainingSeconds(0.2));
       const started = performance.now();
       const compact = await compactMipAward(instance, { timeLimitSeconds: seconds, shouldStop: cancelled });
@@ -240,7 +243,6 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     let neighbourhoods = { tried: 0, improved: 0 };
     let coverNeighbourhoods = { tried: 0, improved: 0 };
     let lastDuals: Float64Array = new Float64Array(0);
-    let allExhausted = false;
 
     /**
      * Column generation to the LP optimum (or a limit); returns the last LP, the
@@ -249,13 +251,13 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
      * rounds price at smoothed duals (Wentges 1997: α·centre + (1 − α)·current,
      * the centre being the duals of the best bound so far) and keep only the
      * lines of positive reduced profit at the current duals. A round that finds
-     * none prices at the current duals (quick, then deep), which alone can end
+     * none prices at the current duals (quick, then deep, then ten times deeper), which alone can end
      * the phase and which alone yields bounds.
      */
     const generate = (from: number, to: number): { lp: SolveOutcome; bound: number; exhausted: boolean } => {
       let bound = Infinity;
       let centre: Float64Array | undefined;
-      let mode: "smooth" | "plain" | "deep" = "plain";
+      let mode: "smooth" | "plain" | "deep" | "deeper" = "plain";
       for (let round = 0; ; round++) {
         const lp = clock.phase(`${phase}-lp`, () => master.solveLp(clock.remainingSeconds(share), stop));
         const y = (lastDuals = master.duals());
@@ -263,6 +265,10 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
           noteStop();
           return { lp, bound, exhausted: false };
         }
+        // Once the coverage LP leaves less than half an open position's tie-break open, its bound on
+        // open time is 0 and cannot fall further: the integer solve takes over (an award that then
+        // leaves nothing open is proven optimal for coverage without more pricing).
+        if (phase === "coverage" && lp.objective >= -0.5 / (1 + totalPositions)) return { lp, bound, exhausted: false };
         const at = mode === "smooth" && centre ? centre.map((v, r) => SMOOTHING * v + (1 - SMOOTHING) * y[r]!) : y;
         const cost = pairingCosts(at);
         const current = pairingCosts(y);
@@ -278,7 +284,9 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
             const yi = y[master.crewRow[i]!]!;
             const request = { scoreWeight: scoreWeight(i, at), cost, threshold: at[master.crewRow[i]!]! + TOL, maxLines: linesPerRound, nodeLimit: quickNodes };
             let r = priceLines(problem, c, request);
-            if (mode === "deep" && r.lines.length === 0 && !r.exhausted) r = priceLines(problem, c, { ...request, nodeLimit });
+            if ((mode === "deep" || mode === "deeper") && r.lines.length === 0 && !r.exhausted) {
+              r = priceLines(problem, c, { ...request, nodeLimit: mode === "deep" ? nodeLimit : nodeLimit * DEEPER });
+            }
             exhausted &&= r.exhausted;
             if (mode !== "smooth") lagrangian += Math.max(0, r.upperBound - yi);
             const weight = scoreWeight(i, y);
@@ -307,6 +315,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         }
         if (mode === "smooth") mode = "plain";
         else if (mode === "plain" && !exhausted) mode = "deep";
+        else if (mode === "deep" && !exhausted) mode = "deeper";
         else {
           if (!exhausted) noteStop();
           return { lp, bound: exhausted ? Math.min(bound, lp.objective) : bound, exhausted };
@@ -436,7 +445,8 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     }
     // Phase 1's integer optimum, counted from the lines chosen (Σ c_p u_p).
     const coverage = coverageOf(cover1.chosen);
-    allExhausted = cover?.exhausted ?? true;
+    // Coverage is proven optimal by phase 1's own proof, or by an award that leaves nothing open.
+    const coverageProven = cover1.proven || [...openAfter(cover1.chosen).values()].every((open) => open === 0);
 
     // Phase 2: wishes with the coverage kept.
     phase = "wishes";
@@ -455,7 +465,6 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     share = 0.5;
     const wishes = atBest ? { bound: reachable, exhausted: false } : generate(45, 75);
     share = 0.55;
-    allExhausted &&= wishes.exhausted;
     progress("integer", 78, "Choosing one line per crew member");
     const final: { proven: boolean; chosen: MasterColumn[] } = atBest ? { proven: false, chosen: wishStart } : integer(wishes.bound, wishes.exhausted, wishStart);
     share = 1;
@@ -517,7 +526,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         objective,
         lpBound,
         gap,
-        provenOptimal: cover1.proven && ((everyoneAtBest && alone.exhausted.every(Boolean)) || (allExhausted && final.proven)),
+        provenOptimal: coverageProven && ((everyoneAtBest && alone.exhausted.every(Boolean)) || (wishes.exhausted && final.proven)),
         neighbourhoods: { coverage: coverNeighbourhoods, wishes: neighbourhoods },
         illegalPairings: problem.illegal,
         fairnessShortfalls,
