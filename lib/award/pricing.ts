@@ -30,7 +30,7 @@ import type { Wish } from "../domain/index.ts";
 import { matchesTripSelection, periodWeekends, rankWeight } from "../domain/index.ts";
 import { daysBetween } from "../domain/time.ts";
 import { extendAll, finish, start, type LineState } from "../rules/index.ts";
-import { chainAfter, chainBound, nowScore } from "./chain-bound.ts";
+import { chainAfter, chainBound, nowScore, type ChainBound } from "./chain-bound.ts";
 import { scoreLine, successorPositions, type AwardProblem, type CrewProblem } from "./problem.ts";
 
 export interface PriceRequest {
@@ -221,7 +221,11 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   // after[j]: the best Σ gain of a chain that follows position j (0: stop there).
   const after = chainAfter(problem, c, gain, usable);
   // The Lagrangian chain bound (chain-bound.ts): far tighter where duals and wishes pull apart.
-  const chain = chainBound(problem, c, gain, usable, request.scoreWeight, request.threshold, request.boundSteps ?? 4);
+  // Not within a pool of a few trips (a neighbourhood's search, small already): there its passes over
+  // every position cost more than they prune (measured on generated L, where the neighbourhoods then
+  // covered fewer trips in the time allowed).
+  const pooled = allowed !== undefined;
+  const chain = pooled ? neutralBound(m) : chainBound(problem, c, gain, usable, request.scoreWeight, request.threshold, request.boundSteps ?? 4);
   // Best gain per credit minute and per period day at positions ≥ j (positive gains only).
   const perCredit = new Float64Array(m + 1);
   const perDay = new Float64Array(m + 1);
@@ -240,7 +244,9 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   // of what the trip alone does to the crew member's score (a guide for the order only: measured on the
   // benchmark's month, this order finds positive lines within far fewer nodes than either part alone).
   const key = new Float64Array(m);
-  for (const j of backwards) key[j] = chain.step(j, -10) + chain.suffix[j]! + (alone ? 0.5 * request.scoreWeight * alone[j]! : 0);
+  for (const j of backwards) {
+    key[j] = pooled ? gain[j]! + after[j]! + (alone ? request.scoreWeight * alone[j]! : 0) : chain.step(j, -10) + chain.suffix[j]! + (alone ? 0.5 * request.scoreWeight * alone[j]! : 0);
+  }
   const order = (js: readonly number[]) => js.filter((j) => usable[j]).sort((a, b) => key[b]! - key[a]! || a - b);
   const rootChildren = order(backwards);
   // Each list of children comes with boundFrom[x]: the most any child from index x on can add to the
@@ -321,7 +327,7 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
     const bounds = scoreWeight > 0 ? wishBounds(problem, c, path, dayCount, credit, from) : undefined;
     const optimistic = bounds?.ahead ?? 0;
     // The chain bound's base at this node: what the line so far is worth to it.
-    const base = gainSum + scoreWeight * nowScore(problem, c, path, dayCount, credit, chain.theta) - chain.kappa * credit - chain.mu * worked + chain.constant;
+    const base = pooled ? Infinity : gainSum + scoreWeight * nowScore(problem, c, path, dayCount, credit, chain.theta) - chain.kappa * credit - chain.mu * worked + chain.constant;
     const lastDay = path.length ? chain.lastDay[path.at(-1)!]! : -10;
     const chained = path.length ? base + chain.suffix[path.at(-1)!]! : chain.root;
     if (Math.min(chained, gainSum + ahead(chainAfter, from, credit, worked) + scoreWeight * optimistic) <= floor) return Infinity;
@@ -397,6 +403,22 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   // Every line not returned was pruned below the floor (≤ the threshold or the best found) or lies in an unsearched subtree.
   const best = found[0]?.value ?? -Infinity;
   return { lines: found, upperBound: Math.min(chain.root, Math.max(best, request.threshold, stopped ? frontier : -Infinity)), exhausted: !stopped, nodes };
+}
+
+/** A chain bound that bounds nothing (pooled searches): every test against it passes. */
+function neutralBound(m: number): ChainBound {
+  return {
+    root: Infinity,
+    suffix: new Float64Array(m),
+    step: () => 0,
+    lastDay: new Int32Array(m),
+    regainMax: 0,
+    tail: undefined,
+    kappa: 0,
+    mu: 0,
+    theta: new Float64Array(0),
+    constant: 0,
+  };
 }
 
 function compareLines(a: readonly number[], b: readonly number[]): number {

@@ -278,7 +278,9 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         clock.phase(`${phase}-pricing`, () => {
           for (const [i, c] of problem.crew.entries()) {
             if (stop()) {
+              // A round cut short prices only some crew: its sum leaves the others out and bounds nothing.
               exhausted = false;
+              lagrangian = Infinity;
               break;
             }
             const yi = y[master.crewRow[i]!]!;

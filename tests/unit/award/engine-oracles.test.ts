@@ -253,6 +253,21 @@ describe("the award engine against outside oracles", { timeout: 120_000 }, () =>
     expect(problems).toEqual([]);
   });
 
+  // A run stopped part-way (as a cancel or a time limit stops it: between pricing calls) may report a weaker
+  // bound, never one below the optimum — a pricing round cut short must not count as a bound.
+  it("never reports a bound below the brute-force optimum when stopped part-way through pricing", async () => {
+    const problems: string[] = [];
+    for (const c of cases.slice(0, 4)) {
+      for (const polls of [3, 7, 12, 20, 35]) {
+        let seen = 0;
+        const r = await solveAward(c.instance, { shouldStop: () => ++seen > polls });
+        if (r.report.lpBound < c.brute.objective - 1e-9) problems.push(`${c.name}, stopped after ${polls} polls: bound ${r.report.lpBound} below the optimum ${c.brute.objective}`);
+        if (r.report.provenOptimal && Math.abs(r.report.objective - c.brute.objective) > 1e-6) problems.push(`${c.name}, stopped after ${polls} polls: claims optimality at ${r.report.objective}`);
+      }
+    }
+    expect(problems).toEqual([]);
+  });
+
   // Reduced profits from the engine's final duals (AWARD-MODEL.md, column generation), over every enumerated line.
   it("stops column generation only when no legal line has positive reduced profit", () => {
     const problems: string[] = [];
