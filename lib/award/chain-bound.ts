@@ -358,6 +358,16 @@ function chainPass(
   // best[i]: the best fresh[b] + suffix[b] over usable positions b ≥ i, and which b.
   const bestFrom = new Float64Array(m + 1).fill(-Infinity);
   const bestAt = new Int32Array(m + 1).fill(-1);
+  // The best next trip after a trip whose last period day is `last`: offer(b, last) for each candidate.
+  let value = 0;
+  let chosen = -1;
+  const offer = (b: number, last: number) => {
+    const v = step(b, last) + suffix[b]!;
+    if (v > value) {
+      value = v;
+      chosen = b;
+    }
+  };
   const tail = cc.tail;
   if (tail && list.length * list.length <= 8 * m) {
     // A small pool of usable trips (a neighbourhood's): arc by arc over the pool alone.
@@ -366,17 +376,9 @@ function chainPass(
     for (let x = list.length - 1; x >= 0; x--) {
       const j = list[x]!;
       const last = cc.lastDay[j]!;
-      let value = 0;
-      let chosen = -1;
-      for (let y = x + 1; y < list.length; y++) {
-        const b = list[y]!;
-        if (b < tail[j]!) continue;
-        const v = step(b, last) + suffix[b]!;
-        if (v > value) {
-          value = v;
-          chosen = b;
-        }
-      }
+      value = 0;
+      chosen = -1;
+      for (let y = x + 1; y < list.length; y++) if (list[y]! >= tail[j]!) offer(list[y]!, last);
       suffix[j] = value;
       choice[j] = chosen;
       if (fresh[j]! + value > after) {
@@ -393,21 +395,14 @@ function chainPass(
         bestAt[j] = bestAt[j + 1]!;
         continue;
       }
-      let value = 0;
-      let chosen = -1;
+      value = 0;
+      chosen = -1;
       const last = cc.lastDay[j]!;
       if (tail) {
         const from = tail[j]!;
         // Positions starting on the last day or the day after may share a day or a weekend: one by one.
         const near = Math.max(from, cc.fromDay[Math.min(cc.fromDay.length - 1, Math.max(0, last + 2))]!);
-        for (let b = from; b < near; b++) {
-          if (!usable[b]) continue;
-          const v = step(b, last) + suffix[b]!;
-          if (v > value) {
-            value = v;
-            chosen = b;
-          }
-        }
+        for (let b = from; b < near; b++) if (usable[b]) offer(b, last);
         if (bestFrom[near]! > value) {
           value = bestFrom[near]!;
           chosen = bestAt[near]!;
@@ -415,12 +410,7 @@ function chainPass(
       } else {
         for (const k of problem.next[eligible[j]!]!) {
           const b = c.position[k]!;
-          if (b < 0 || !usable[b]) continue;
-          const v = step(b, last) + suffix[b]!;
-          if (v > value) {
-            value = v;
-            chosen = b;
-          }
+          if (b >= 0 && usable[b]) offer(b, last);
         }
       }
       suffix[j] = value;

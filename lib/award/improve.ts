@@ -80,7 +80,7 @@ export function awardValue(input: Pick<ImproveInput, "coefficient" | "fairness">
 }
 
 /** A small seeded generator (mulberry32): the same neighbourhoods on every run. */
-function mulberry32(seed: number): () => number {
+export function mulberry32(seed: number): () => number {
   let a = seed >>> 0;
   return () => {
     a = (a + 0x6d2b79f5) >>> 0;

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { instanceSchema, type Instance } from "@/lib/domain";
 import { prepareProblem } from "@/lib/award";
 import { chainBound, nowScore } from "@/lib/award/chain-bound";
+import { mulberry32 as random } from "@/lib/award/improve";
 import { priceLines } from "@/lib/award/pricing";
 import { generatePeriod } from "@/seed/generator/generate-period";
 import { enumerateLines } from "./oracle/enumerate-lines.ts";
@@ -13,18 +14,6 @@ function tiny(seed: number, crew: number, pairings: number, days: number, minHou
   const instance = generatePeriod({ crew, pairings, days, seed, positions: ["captain"] }).instances[0]!;
   const rules = instance.ruleSet.rules.map((r) => (r.id === "credit-window" ? { ...r, params: { minMinutes: minHours * H, maxMinutes: maxHours * H } } : r));
   return instanceSchema.parse({ ...instance, ruleSet: { ...instance.ruleSet, rules }, settings: { ...instance.settings, mode: "balanced" } });
-}
-
-/** mulberry32: a small seeded generator, so the costs are the same on every run. */
-function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
 }
 
 const CASES = [
