@@ -97,7 +97,7 @@ function compile(problem: AwardProblem, c: CrewProblem): Compiled {
     while (j < m && firstDay[j]! < d) j++;
     fromDay[d] = j;
   }
-  const tail = monotoneTails(problem, c);
+  const tail = crewTails(problem, c);
   const { rankDecay, baseLineValue } = problem.instance.settings;
   const trips: Compiled["trips"] = [];
   const dayLoss = new Float64Array(L);
@@ -173,8 +173,8 @@ function compile(problem: AwardProblem, c: CrewProblem): Compiled {
   return compiled;
 }
 
-/** For a monotone network: the first successor position of each position (m when none); undefined otherwise. */
-function monotoneTails(problem: AwardProblem, c: CrewProblem): Int32Array | undefined {
+/** The group's monotone tails (problem.ts) in one crew member's positions: the first successor position of each (m when none). */
+function crewTails(problem: AwardProblem, c: CrewProblem): Int32Array | undefined {
   const tails = problem.tails;
   if (!tails) return undefined;
   const { eligible } = c;
@@ -244,7 +244,6 @@ export function chainBound(
   steps: number,
 ): ChainBound {
   const cc = compile(problem, c);
-  const m = c.eligible.length;
   const maxC = problem.maxCreditMinutes;
   const minC = problem.minCreditMinutes;
   const maxW = c.maxWorkedDays;
