@@ -53,6 +53,12 @@ export class Master {
   coverageRow = -1;
   readonly fairRow: number[] = [];
   readonly fairCol: number[] = [];
+  /** [lower, upper] of every row */
+  private readonly rowBounds: [number, number][];
+  /** objective coefficient of each open-time column u_p (phase 1: −c_p; phase 2: 0) and the coverage row's c_p */
+  private readonly openCost = new Map<number, number>();
+  private readonly coverageCoefficient = new Map<number, number>();
+  private fairnessSettings: { floor: number; penalty: number } | undefined;
 
   constructor(
     private readonly highs: Highs,
@@ -81,6 +87,7 @@ export class Master {
       rowUpper.push(reserve.max);
     }
     this.numRows = rowLower.length;
+    this.rowBounds = rowLower.map((lo, r) => [lo, rowUpper[r]!]);
     this.model.passModel({
       numCols: 0,
       numRows: this.numRows,
@@ -126,6 +133,7 @@ export class Master {
 
   private addRawRow(lower: number, upper: number, indices: number[], values: number[]): number {
     this.model.addRow(lower, upper, { indices, values });
+    this.rowBounds.push([lower, upper]);
     return this.numRows++;
   }
 
@@ -164,7 +172,10 @@ export class Master {
 
   /** Phase 1's objective: maximise −Σ c_p u_p, every line worth 0. */
   setCoverageObjective(openCost: ReadonlyMap<number, number>): void {
-    for (const [p, col] of this.openCol) this.model.changeColCost(col, -(openCost.get(p) ?? 0));
+    for (const [p, col] of this.openCol) {
+      this.model.changeColCost(col, -(openCost.get(p) ?? 0));
+      this.openCost.set(p, -(openCost.get(p) ?? 0));
+    }
   }
 
   /**
@@ -181,12 +192,15 @@ export class Master {
     const values: number[] = [];
     for (const [p, col] of this.openCol) {
       this.model.changeColCost(col, 0);
+      this.openCost.set(p, 0);
+      this.coverageCoefficient.set(p, openCost.get(p) ?? 0);
       indices.push(col);
       values.push(openCost.get(p) ?? 0);
     }
     this.coverageRow = this.addRawRow(-Infinity, limit, [], []);
     indices.forEach((col, k) => this.model.changeCoefficient(this.coverageRow, col, values[k]!));
     if (fairness) {
+      this.fairnessSettings = { floor: fairness.floor, penalty: fairness.penalty };
       for (let i = 0; i < fairness.crewCount; i++) {
         this.fairRow[i] = this.addRawRow(fairness.floor, Infinity, [], []);
         this.fairCol[i] = this.addRawCol(-fairness.penalty, 0, Infinity, [this.fairRow[i]!], [1]);
@@ -234,9 +248,66 @@ export class Master {
     return outcome;
   }
 
+  /** Rows of the model (the length of a dual vector). */
+  get rowCount(): number {
+    return this.numRows;
+  }
+
   /** Row duals of the last LP solve. */
   duals(): Float64Array {
     return this.model.getSolution().rowDual;
+  }
+
+  /**
+   * Duals made usable by `lagrangianBound`: a row with no upper bound (≥) gets
+   * y ≤ 0, one with no lower bound (≤) y ≥ 0 — the signs an optimal dual has,
+   * which a solve may miss by its tolerances.
+   */
+  project(y: Float64Array): Float64Array {
+    const out = Float64Array.from(y);
+    this.rowBounds.forEach(([lo, hi], r) => {
+      if (hi === Infinity) out[r] = Math.min(0, out[r]!);
+      if (lo === -Infinity) out[r] = Math.max(0, out[r]!);
+    });
+    return out;
+  }
+
+  /**
+   * The Lagrangian bound at duals y (projected): every row but the crew rows is
+   * priced, so for any y
+   *
+   *     L(y) = Σ_i line_i + Σ_r (y_r ≥ 0 ? y_r·upper_r : y_r·lower_r)
+   *            + Σ_p d_p·max(0, rc(u_p)) + Σ_i φ·max(0, rc(f_i))
+   *
+   * bounds every solution that covers exactly (no surplus or under-cover,
+   * u_p ≤ d_p, f_i ≤ φ), where line_i is an upper bound on crew i's best
+   * c_ℓ − Σ_r y_r a_rℓ over all of their lines (the crew row's own dual left
+   * out) — from pricing, and at least the reserve line's value. At the LP's
+   * optimal duals with exhausted pricing it is the LP optimum.
+   */
+  lagrangianBound(y: Float64Array, line: readonly number[]): number {
+    let total = 0;
+    this.crewRow.forEach((_, i) => {
+      const reserveValue = this.reserveRow >= 0 ? -y[this.reserveRow]! : 0;
+      total += Math.max(line[i]!, reserveValue);
+    });
+    const crewRows = new Set(this.crewRow);
+    this.rowBounds.forEach(([lo, hi], r) => {
+      if (crewRows.has(r)) return;
+      const v = y[r]!;
+      if (v > 0) total += v * hi;
+      else if (v < 0) total += v * lo;
+    });
+    const z = this.coverageRow >= 0 ? y[this.coverageRow]! : 0;
+    for (const [p, row] of this.coverRow) {
+      const rc = (this.openCost.get(p) ?? 0) - y[row]! - z * (this.coverageCoefficient.get(p) ?? 0);
+      total += this.need.get(p)! * Math.max(0, rc);
+    }
+    if (this.fairnessSettings) {
+      const { floor, penalty } = this.fairnessSettings;
+      for (const r of this.fairRow) total += floor * Math.max(0, -penalty - y[r]!);
+    }
+    return total;
   }
 
   /** Values of the master columns in the last solve. */

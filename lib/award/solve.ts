@@ -244,43 +244,59 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     let coverNeighbourhoods = { tried: 0, improved: 0 };
     let lastDuals: Float64Array = new Float64Array(0);
 
+    /** Duals with a bound: L(y) = `value`, each crew member's line term (`Master.lagrangianBound`). */
+    interface Bounded {
+      y: Float64Array;
+      line: number[];
+      value: number;
+    }
+
     /**
      * Column generation to the LP optimum (or a limit); returns the last LP, the
-     * best Lagrangian bound and whether the last pricing was exhaustive.
+     * best Lagrangian bound with its duals, and whether the last pricing was
+     * exhaustive at the LP's own duals (then the LP is optimal over all lines).
      * Set-partitioning LPs are degenerate and their duals jump about, so most
      * rounds price at smoothed duals (Wentges 1997: α·centre + (1 − α)·current,
      * the centre being the duals of the best bound so far) and keep only the
-     * lines of positive reduced profit at the current duals. A round that finds
-     * none prices at the current duals (quick, then deep, then ten times deeper), which alone can end
-     * the phase and which alone yields bounds.
+     * lines of positive reduced profit at the current duals. Every round that
+     * prices all crew yields a bound (Master.lagrangianBound), smoothed or not.
+     * A round that finds nothing prices at the current duals (quick, then deep,
+     * then ten times deeper), which alone can end the phase.
      */
-    const generate = (from: number, to: number): { lp: SolveOutcome; bound: number; exhausted: boolean } => {
-      let bound = Infinity;
-      let centre: Float64Array | undefined;
+    const generate = (from: number, to: number): { lp: SolveOutcome; bound: number; bounded?: Bounded; exhausted: boolean } => {
+      let bounded: Bounded | undefined;
       let mode: "smooth" | "plain" | "deep" | "deeper" = "plain";
+      // With pricing exhausted at its duals, the LP's optimum is the LP bound itself (without L(y)'s tolerances).
+      const result = (lp: SolveOutcome, exhausted: boolean) => ({
+        lp,
+        bound: Math.min(bounded?.value ?? Infinity, exhausted ? lp.objective : Infinity),
+        ...(bounded ? { bounded } : {}),
+        exhausted,
+      });
       for (let round = 0; ; round++) {
         const lp = clock.phase(`${phase}-lp`, () => master.solveLp(clock.remainingSeconds(share), stop));
-        const y = (lastDuals = master.duals());
         if (lp.status !== "optimal") {
           noteStop();
-          return { lp, bound, exhausted: false };
+          return result(lp, false);
         }
+        const y = (lastDuals = master.project(master.duals()));
         // Once the coverage LP leaves less than half an open position's tie-break open, its bound on
         // open time is 0 and cannot fall further: the integer solve takes over (an award that then
         // leaves nothing open is proven optimal for coverage without more pricing).
-        if (phase === "coverage" && lp.objective >= -0.5 / (1 + totalPositions)) return { lp, bound, exhausted: false };
-        const at = mode === "smooth" && centre ? centre.map((v, r) => SMOOTHING * v + (1 - SMOOTHING) * y[r]!) : y;
+        if (phase === "coverage" && lp.objective >= -0.5 / (1 + totalPositions)) return result(lp, false);
+        const centre = bounded?.y;
+        const at: Float64Array = mode === "smooth" && centre ? centre.map((v, r) => SMOOTHING * v + (1 - SMOOTHING) * y[r]!) : y;
         const cost = pairingCosts(at);
         const current = pairingCosts(y);
         let added = 0;
-        let lagrangian = lp.objective;
         let exhausted = true;
+        let complete = true;
+        const line: number[] = [];
         clock.phase(`${phase}-pricing`, () => {
           for (const [i, c] of problem.crew.entries()) {
             if (stop()) {
-              // A round cut short prices only some crew: its sum leaves the others out and bounds nothing.
-              exhausted = false;
-              lagrangian = Infinity;
+              // A round cut short prices only some crew: it bounds nothing.
+              exhausted = complete = false;
               break;
             }
             const yi = y[master.crewRow[i]!]!;
@@ -290,29 +306,27 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
               r = priceLines(problem, c, { ...request, nodeLimit: mode === "deep" ? nodeLimit : nodeLimit * DEEPER });
             }
             exhausted &&= r.exhausted;
-            if (mode !== "smooth") lagrangian += Math.max(0, r.upperBound - yi);
+            line.push(r.upperBound);
             const weight = scoreWeight(i, y);
-            for (const line of r.lines) {
-              let profit = weight * line.score - yi;
-              for (const k of line.pairings) profit -= current[k]!;
-              if (profit > TOL && addColumn({ crew: i, pairings: line.pairings, reserve: false, score: line.score })) added++;
+            for (const l of r.lines) {
+              let profit = weight * l.score - yi;
+              for (const k of l.pairings) profit -= current[k]!;
+              if (profit > TOL && addColumn({ crew: i, pairings: l.pairings, reserve: false, score: l.score })) added++;
             }
           }
         });
         rounds++;
-        if (mode !== "smooth" && Number.isFinite(lagrangian) && lagrangian < bound) {
-          bound = lagrangian;
-          centre = y;
-        }
+        const value = complete ? master.lagrangianBound(at, line) : Infinity;
+        if (value < (bounded?.value ?? Infinity)) bounded = { y: at, line, value };
         const fraction = Math.min(1, round / 30);
         progress(phase, from + (to - from) * fraction, `${phase === "coverage" ? "Covering the trips" : "Granting wishes"}: round ${rounds}, ${master.columns.length} lines, LP ${lp.objective.toFixed(3)}`);
         if (rounds >= roundLimit) {
           stoppedBy = "iteration-limit";
-          return { lp, bound, exhausted: false };
+          return result(lp, false);
         }
         if (added > 0) {
           // Smoothed and plain rounds alternate, so the centre keeps moving to better bounds.
-          mode = mode !== "smooth" && centre ? "smooth" : "plain";
+          mode = mode !== "smooth" && bounded ? "smooth" : "plain";
           continue;
         }
         if (mode === "smooth") mode = "plain";
@@ -320,7 +334,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         else if (mode === "deep" && !exhausted) mode = "deeper";
         else {
           if (!exhausted) noteStop();
-          return { lp, bound: exhausted ? Math.min(bound, lp.objective) : bound, exhausted };
+          return result(lp, exhausted);
         }
       }
     };
@@ -338,36 +352,40 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       return (problem.crew[i]!.weight - yf) / best[i]!;
     };
 
-    /** The integer solve, then closing the gap by enumerating every line within it; returns the chosen columns. */
-    const integer = (bound: number, exhausted: boolean, start: readonly MasterColumn[] | undefined) => {
+    /**
+     * The integer solve, then closing the gap: with L(y) − z_MIP = g, a better
+     * solution can use only lines whose value at y is within g of their crew
+     * member's term in L(y); when every such line is enumerated and the
+     * integer solve repeated, the result is optimal. Returns the chosen columns.
+     */
+    const integer = (bound: number, bounded: Bounded | undefined, exhausted: boolean, start: readonly MasterColumn[] | undefined) => {
       let mip = clock.phase(`${phase}-mip`, () => master.solveMip(clock.remainingSeconds(share), stop, 1e-9, start));
       let proven = false;
       if (mip.status !== "optimal") noteStop();
-      if (exhausted && mip.status === "optimal") {
-        const gapAbs = bound - mip.objective;
-        if (gapAbs <= 1e-7 * Math.max(1, Math.abs(bound))) proven = true;
-        else {
-          const y = lastDuals;
-          const cost = pairingCosts(y);
-          let complete = true;
-          let added = 0;
-          clock.phase(`${phase}-closing`, () => {
-            for (const [i, c] of problem.crew.entries()) {
-              if (stop()) {
-                complete = false;
-                break;
-              }
-              const yi = y[master.crewRow[i]!]!;
-              const cap = options.closingLines ?? 400;
-              const r = priceLines(problem, c, { scoreWeight: scoreWeight(i, y), cost, threshold: yi - gapAbs - TOL, maxLines: cap, nodeLimit: nodeLimit * 5 });
-              if (!r.exhausted || r.lines.length >= cap) complete = false;
-              for (const line of r.lines) if (addColumn({ crew: i, pairings: line.pairings, reserve: false, score: line.score })) added++;
+      if (mip.status === "optimal" && bound - mip.objective <= 1e-7 * Math.max(1, Math.abs(bound))) proven = true;
+      else if (exhausted && bounded && mip.status === "optimal") {
+        const gapAbs = bounded.value - mip.objective;
+        const { y, line } = bounded;
+        const reserveValue = master.reserveRow >= 0 ? -y[master.reserveRow]! : 0;
+        const cost = pairingCosts(y);
+        let complete = true;
+        let added = 0;
+        clock.phase(`${phase}-closing`, () => {
+          for (const [i, c] of problem.crew.entries()) {
+            if (stop()) {
+              complete = false;
+              break;
             }
-          });
-          const chosen = chosenColumns();
-          if (added > 0) mip = clock.phase(`${phase}-mip`, () => master.solveMip(clock.remainingSeconds(share), stop, 1e-9, chosen));
-          proven = complete && mip.status === "optimal";
-        }
+            const cap = options.closingLines ?? 400;
+            const term = Math.max(line[i]!, reserveValue);
+            const r = priceLines(problem, c, { scoreWeight: scoreWeight(i, y), cost, threshold: term - gapAbs - TOL, maxLines: cap, nodeLimit: nodeLimit * 5 });
+            if (!r.exhausted || r.lines.length >= cap) complete = false;
+            for (const l of r.lines) if (addColumn({ crew: i, pairings: l.pairings, reserve: false, score: l.score })) added++;
+          }
+        });
+        const chosen = chosenColumns();
+        if (added > 0) mip = clock.phase(`${phase}-mip`, () => master.solveMip(clock.remainingSeconds(share), stop, 1e-9, chosen));
+        proven = complete && mip.status === "optimal";
       }
       const chosen = chosenColumns();
       const fallback = [...(start ?? greedyColumns)];
@@ -418,7 +436,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     // the wishes' tie-break (below δ/2).
     const coverageLpBound = cover && Number.isFinite(cover.bound) ? Math.max(0, -cover.bound - (totalPositions + 0.5) / (1 + totalPositions)) : 0;
     share = 0.2;
-    const cover1 = cover ? integer(cover.lp.objective, cover.exhausted, startColumns) : { proven: true, chosen: startColumns };
+    const cover1 = cover ? integer(cover.bound, cover.bounded, cover.exhausted, startColumns) : { proven: true, chosen: startColumns };
     share = 0.4;
     const neighbourhoodInput = (start: MasterColumn[]) => ({
       problem,
@@ -465,10 +483,10 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     const reachable = problem.crew.reduce((t, c, i) => t + (best[i]! > 0 ? c.weight : 0), 0);
     const atBest = value(wishStart) >= reachable - 1e-9 * Math.max(1, reachable);
     share = 0.5;
-    const wishes = atBest ? { bound: reachable, exhausted: false } : generate(45, 75);
+    const wishes: { bound: number; bounded?: Bounded; exhausted: boolean } = atBest ? { bound: reachable, exhausted: false } : generate(45, 75);
     share = 0.55;
     progress("integer", 78, "Choosing one line per crew member");
-    const final: { proven: boolean; chosen: MasterColumn[] } = atBest ? { proven: false, chosen: wishStart } : integer(wishes.bound, wishes.exhausted, wishStart);
+    const final: { proven: boolean; chosen: MasterColumn[] } = atBest ? { proven: false, chosen: wishStart } : integer(wishes.bound, wishes.bounded, wishes.exhausted, wishStart);
     share = 1;
     if (!atBest && !final.proven && !stop()) {
       progress("integer", 88, "Improving the award a few crew members at a time");

@@ -18,6 +18,8 @@ import { createRequire } from "node:module";
 import GLPK, { type LP } from "glpk.js/node";
 import { beforeAll, describe, expect, it } from "vitest";
 import { solveAward, type AwardResult } from "@/lib/award";
+import { mulberry32 } from "@/lib/award/improve";
+import { loadHighs, Master } from "@/lib/award/master";
 import { instanceSchema, instantMs, satisfaction, type Instance } from "@/lib/domain";
 import { generatePeriod } from "@/seed/generator/generate-period";
 import type { GeneratorInput } from "@/seed/generator/params";
@@ -265,6 +267,57 @@ describe("the award engine against outside oracles", { timeout: 120_000 }, () =>
         if (r.report.provenOptimal && Math.abs(r.report.objective - c.brute.objective) > 1e-6) problems.push(`${c.name}, stopped after ${polls} polls: claims optimality at ${r.report.objective}`);
       }
     }
+    expect(problems).toEqual([]);
+  });
+
+  // Lagrangian duality (Geoffrion 1974): with the crew rows kept and every other row priced, any duals give an
+  // upper bound. Checked at random duals of either sign, with each crew member's best line value taken from the
+  // independent enumeration, against the brute-force optimum — for phase 1 (open time) and phase 2 (wishes).
+  it("turns any duals into a bound no better than the brute-force optimum (Master.lagrangianBound)", async () => {
+    const highs = await loadHighs();
+    const problems: string[] = [];
+    const checked = cases.filter(allHoldLines);
+    for (const c of checked) {
+      const { e, brute } = c;
+      const n = e.crew.length;
+      const P = e.slots.length;
+      const need = new Map(e.slots.map((k) => [k, 1]));
+      const openCost = new Map(e.slots.map((k) => [k, e.instance.pairings[k]!.creditMinutes + 1 / (1 + P)]));
+      const { min, max } = e.instance.settings.reserve;
+      const random = mulberry32(e.slots.length * 7919 + n);
+      for (const phase of [1, 2] as const) {
+        const master = new Master(highs, n, need, { min, max: max ?? n });
+        try {
+          master.setCoverageObjective(openCost);
+          if (phase === 2) master.setWishObjective(openCost, brute.openCost + 1e-9, () => 0);
+          const optimum = phase === 1 ? -brute.openCost : brute.objective;
+          const lineValue = (y: Float64Array, i: number) =>
+            Math.max(
+              ...e.crew[i]!.lines.map((l) => {
+                let v = phase === 2 ? (brute.weights[i]! * l.score) / e.crew[i]!.best : 0;
+                for (const k of l.pairings) v -= y[master.coverRow.get(k)!]!;
+                return v;
+              }),
+            );
+          for (let trial = 0; trial < 300; trial++) {
+            const scale = [0.01, 1, 30, 1000][trial % 4]!;
+            const raw = Float64Array.from({ length: master.rowCount }, () => (random() * 2 - 1) * scale);
+            if (master.coverageRow >= 0) raw[master.coverageRow] = (random() * 2 - 1) * (scale / 100);
+            const y = master.project(raw);
+            const bound = master.lagrangianBound(y, e.crew.map((_, i) => lineValue(y, i)));
+            if (!(bound >= optimum - 1e-9)) problems.push(`${c.name}, phase ${phase}, trial ${trial}: L(y) = ${bound} below the optimum ${optimum}`);
+          }
+          // At zero duals it is each crew member's best line alone: Σ W_i in phase 2, and 0 open in phase 1.
+          const zero = new Float64Array(master.rowCount);
+          const atZero = master.lagrangianBound(zero, e.crew.map((_, i) => lineValue(zero, i)));
+          const expected = phase === 1 ? 0 : brute.weights.reduce((t, w) => t + w, 0);
+          if (!(Math.abs(atZero - expected) <= 1e-9)) problems.push(`${c.name}, phase ${phase}: L(0) = ${atZero}, expected ${expected}`);
+        } finally {
+          master.dispose();
+        }
+      }
+    }
+    expect(checked.length).toBeGreaterThanOrEqual(6);
     expect(problems).toEqual([]);
   });
 
