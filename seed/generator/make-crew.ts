@@ -5,11 +5,13 @@
  * rolling limits.
  */
 import type { CarryIn, CrewMember, FixedActivity, Position } from "../../lib/domain/index.ts";
-import { addDays, addMinutes, atLocalTime, localDate, startOfLocalDay } from "../../lib/domain/time.ts";
+import { addDays, addMinutes, atLocalTime, instantMs, localDate, startOfLocalDay } from "../../lib/domain/time.ts";
 import { OCEANIC_QUALIFICATION } from "../carrier.ts";
 import { makePairing } from "../pairing-factory.ts";
 import type { Rng } from "../random.ts";
 import { crewName } from "./names.ts";
+
+const DAY_MS = 86_400_000;
 import type { GeneratorParams } from "./params.ts";
 
 const PILOT = new Set<Position>(["captain", "first_officer"]);
@@ -80,6 +82,14 @@ function makeMember(ctx: CrewContext, r: Rng, id: string, seniority: number, pos
     );
     carryIn.push({ pairingId: p.id, dutyPeriods: p.dutyPeriods });
   }
+  // Leave or training drawn within a day of the carry-in trip would overlap it or cut short the rest after it
+  // (a schedule nobody could hold): it is dropped. Drawn before the trip, so every other draw stays as it was.
+  const keep = (a: FixedActivity) =>
+    carryIn.every((c) => {
+      const from = instantMs(c.dutyPeriods[0]!.report) - DAY_MS;
+      const to = instantMs(c.dutyPeriods.at(-1)!.release) + DAY_MS;
+      return instantMs(a.end) <= from || instantMs(a.start) >= to;
+    });
   const historyEnd = carryIn[0] ? localDate(carryIn[0].dutyPeriods[0]!.report, zone) : params.startDate;
   return {
     id,
@@ -88,7 +98,7 @@ function makeMember(ctx: CrewContext, r: Rng, id: string, seniority: number, pos
     base: params.base,
     position,
     qualifications,
-    fixedActivities: fixedActivities.sort((a, b) => a.start.localeCompare(b.start)),
+    fixedActivities: fixedActivities.filter(keep).sort((a, b) => a.start.localeCompare(b.start)),
     carryIn,
     lookBack: makeHistory(r, zone, params.startDate, historyEnd),
     carriedWeight: 1,

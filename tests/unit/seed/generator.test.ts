@@ -5,6 +5,7 @@ import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { bundleSchema, canonicalJson, matchesTripFilter, type Bundle } from "@/lib/domain";
 import { instantMs, localDate, localTime, minutesBetween } from "@/lib/domain/time";
+import { checkLine } from "@/lib/rules";
 import { generatePeriod } from "@/seed/generator/generate-period";
 import { holidaysBetween } from "@/seed/generator/holidays";
 import { POPULAR_LAYOVERS, tripAppeal } from "@/seed/generator/make-bids";
@@ -60,6 +61,29 @@ describe("the bid-period generator", { timeout: 60_000 }, () => {
     // The base's zone changes to daylight-saving time on 14 March 2027 (US rule, from memory).
     expect(s.dstChanges).toContain("HLV");
     expect(s.dstChanges).not.toContain("TLR"); // America/Phoenix keeps standard time
+  });
+
+  // Leave and training drawn next to a carry-in trip once made schedules nobody could hold (seen at seed 5: training
+  // overlapping the trip; generated M: training inside the rest after it). The legality engine is the judge here.
+  it("gives every crew member a schedule they can hold before any trip: leave, training and carry-in legal together", () => {
+    const problems: string[] = [];
+    const periods = [
+      { crew: 4, pairings: 12, seed: 5, days: 10, positions: ["captain" as const] },
+      { crew: 150, pairings: 600, seed: 1, days: 31, positions: ["captain" as const] },
+      { crew: 120, seed: 7, days: 31 },
+      { crew: 60, seed: 11, days: 31 },
+    ];
+    for (const { crew, seed, ...rest } of periods) {
+      for (const instance of generatePeriod({ crew, seed, ...rest }).instances) {
+        const { period } = instance;
+        const engine = { stations: instance.stations, zone: period.zone, periodStart: period.startDate, periodEnd: period.endDate };
+        for (const member of instance.crew) {
+          const verdict = checkLine(member, instance.ruleSet, [], engine, { reserve: true });
+          if (!verdict.legal) problems.push(`seed ${seed}, ${crew} crew, ${member.id}: ${verdict.violations.map((v) => v.ruleId).join(", ")}`);
+        }
+      }
+    }
+    expect(problems).toEqual([]);
   });
 
   it("builds trips with the documented report, release and layover rest", () => {
