@@ -10,14 +10,16 @@
  * 3. wishes — the master keeps Σ c_p u_p ≤ U* and maximises
  *    Σ_i W_i · s_iℓ/best_i (less a penalty on fairness-floor slack); column
  *    generation again, then the integer solve;
- * 4. closing the gap — when the integer solution falls short of the LP bound
- *    by g, every line whose reduced profit is at least −g is generated (no
- *    other line can be part of a better integer solution) and the integer
- *    solve repeated: when that enumeration completes, the award is optimal.
+ * 4. closing the gap — when the integer solution falls short of the bound
+ *    L(y) by g, every line whose value at y is within g of its crew member's
+ *    term in L(y) is generated (no other line can be part of a better integer
+ *    solution) and the integer solve repeated: when that enumeration
+ *    completes, the award is optimal.
  *
- * The LP bound reported is the Lagrangian bound z_RMP + Σ_i max(0, best
- * reduced profit of crew i), which is valid even when pricing stopped at its
- * node limit, and equals the LP optimum when pricing is exhausted.
+ * The LP bound reported is the best Lagrangian bound L(y) of the pricing
+ * rounds (Master.lagrangianBound: valid at any duals, even when pricing
+ * stopped at its node limit), or the LP optimum when pricing is exhausted at
+ * the LP's duals.
  * Deterministic: pricing and HiGHS both run in a fixed order with fixed seeds.
  */
 import type { Instance, Stats } from "../domain/index.ts";
@@ -300,18 +302,23 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
               break;
             }
             const yi = y[master.crewRow[i]!]!;
-            const request = { scoreWeight: scoreWeight(i, at), cost, threshold: at[master.crewRow[i]!]! + TOL, maxLines: linesPerRound, nodeLimit: quickNodes };
+            const offset = lineOffset(i, at);
+            const request = { scoreWeight: scoreWeight(i, at), cost, threshold: at[master.crewRow[i]!]! + TOL - offset, maxLines: linesPerRound, nodeLimit: quickNodes };
             let r = priceLines(problem, c, request);
             if ((mode === "deep" || mode === "deeper") && r.lines.length === 0 && !r.exhausted) {
               r = priceLines(problem, c, { ...request, nodeLimit: mode === "deep" ? nodeLimit : nodeLimit * DEEPER });
             }
             exhausted &&= r.exhausted;
-            line.push(r.upperBound);
+            line.push(r.upperBound + offset);
             const weight = scoreWeight(i, y);
             for (const l of r.lines) {
-              let profit = weight * l.score - yi;
+              let profit = weight * l.score - yi + lineOffset(i, y);
               for (const k of l.pairings) profit -= current[k]!;
-              if (profit > TOL && addColumn({ crew: i, pairings: l.pairings, reserve: false, score: l.score })) added++;
+              if (profit <= TOL) continue;
+              if (addColumn({ crew: i, pairings: l.pairings, reserve: false, score: l.score })) added++;
+              // A line the master holds already but pricing values higher (a score above an unproven best
+              // line is clamped in the master): pricing's top lines say nothing of the LP's optimality.
+              else exhausted = false;
             }
           }
         });
@@ -343,6 +350,14 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       const cost = new Float64Array(problem.pairings.length);
       for (const [p, row] of master.coverRow) cost[p] = y[row]!;
       return cost;
+    };
+    /**
+     * What pricing's value leaves out of a line's value at y (crew dual aside): for a crew member without a
+     * line of their own (best ≤ 0) every line counts fully in their fairness row, at score weight 0.
+     */
+    const lineOffset = (i: number, y: Float64Array) => {
+      const fair = master.fairRow[i];
+      return phase === "wishes" && best[i]! <= 0 && fair !== undefined ? -y[fair]! : 0;
     };
     const scoreWeight = (i: number, y: Float64Array) => {
       if (best[i]! <= 0) return 0;
@@ -378,7 +393,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
             }
             const cap = options.closingLines ?? 400;
             const term = Math.max(line[i]!, reserveValue);
-            const r = priceLines(problem, c, { scoreWeight: scoreWeight(i, y), cost, threshold: term - gapAbs - TOL, maxLines: cap, nodeLimit: nodeLimit * 5 });
+            const r = priceLines(problem, c, { scoreWeight: scoreWeight(i, y), cost, threshold: term - gapAbs - TOL - lineOffset(i, y), maxLines: cap, nodeLimit: nodeLimit * 5 });
             if (!r.exhausted || r.lines.length >= cap) complete = false;
             for (const l of r.lines) if (addColumn({ crew: i, pairings: l.pairings, reserve: false, score: l.score })) added++;
           }
