@@ -10,9 +10,9 @@ import { OCEANIC_QUALIFICATION } from "../carrier.ts";
 import { makePairing } from "../pairing-factory.ts";
 import type { Rng } from "../random.ts";
 import { crewName } from "./names.ts";
+import type { GeneratorParams } from "./params.ts";
 
 const DAY_MS = 86_400_000;
-import type { GeneratorParams } from "./params.ts";
 
 const PILOT = new Set<Position>(["captain", "first_officer"]);
 

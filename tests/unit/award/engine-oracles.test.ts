@@ -63,8 +63,9 @@ const CASES: { params: GeneratorInput; variant: Variant }[] = [
   ...[1, 2, 3, 4].map((seed) => ({ params: { crew: 5, seed, days: 7, pairings: 10 }, variant: { minCreditMinutes: 0, maxCreditMinutes: 30 * H } })),
   ...[5, 6].map((seed) => ({ params: { crew: 4, seed, days: 10, pairings: 12 }, variant: { minCreditMinutes: 0, maxCreditMinutes: 40 * H } })),
   // A credit minimum: some lines fall below it, reserve lines appear, some crew may have no legal line at all.
-  // (12 h: at 8 h no optimum holds reserve since the generator drops leave and training beside carry-in trips.)
+  // (At 8 h no optimum holds reserve; at 16 h one crew member of seed 7 has no legal line-holder line.)
   ...[7, 8].map((seed) => ({ params: { crew: 6, seed, days: 8, pairings: 9 }, variant: { minCreditMinutes: 12 * H, maxCreditMinutes: 30 * H } })),
+  { params: { crew: 6, seed: 7, days: 8, pairings: 9 }, variant: { minCreditMinutes: 16 * H, maxCreditMinutes: 30 * H } },
   // A reserve maximum (the master's reserve row).
   { params: { crew: 6, seed: 9, days: 8, pairings: 10 }, variant: { minCreditMinutes: 6 * H, maxCreditMinutes: 30 * H, reserve: { min: 0, max: 1 } } },
 ];
@@ -165,6 +166,8 @@ describe("the award engine against outside oracles", { timeout: 120_000 }, () =>
     expect(cases.filter(allHoldLines).length).toBeGreaterThanOrEqual(6);
     // The credit-minimum cases leave crew with reserve as their only legal line, or as the best choice.
     expect(cases.some((c) => c.brute.lines.some((l) => l.reserve))).toBe(true);
+    // … and some crew member has no legal line-holder line at all (best_i = 0: satisfaction 1 by definition).
+    expect(cases.some((c) => c.e.crew.some((x) => x.best <= 0))).toBe(true);
   });
 
   // Oracle: exhaustive enumeration of legal lines (lib/rules checkLine) and a dynamic program over subsets of pairings.
@@ -272,9 +275,10 @@ describe("the award engine against outside oracles", { timeout: 120_000 }, () =>
   });
 
   // Lagrangian duality (Geoffrion 1974): with the crew rows kept and every other row priced, any duals give an
-  // upper bound. Checked at random duals of either sign, with each crew member's best line value taken from the
-  // independent enumeration, against the brute-force optimum — for phase 1 (open time) and phase 2 (wishes).
-  it("turns any duals into a bound no better than the brute-force optimum (Master.lagrangianBound)", async () => {
+  // upper bound on the LP over all lines, equal to it at the LP's duals. Each crew member's best line value comes
+  // from the independent enumeration; checked for phase 1 (open time), phase 2 (wishes), phase 2 with a fairness
+  // floor, and phase 1 with a reserve line required, at random duals of either sign and at the LP's own.
+  it("turns any duals into a bound on the LP over all enumerated lines, met at the LP's duals (Master.lagrangianBound)", async () => {
     const highs = await loadHighs();
     const problems: string[] = [];
     const checked = cases.filter(allHoldLines);
@@ -286,33 +290,53 @@ describe("the award engine against outside oracles", { timeout: 120_000 }, () =>
       const openCost = new Map(e.slots.map((k) => [k, e.instance.pairings[k]!.creditMinutes + 1 / (1 + P)]));
       const { min, max } = e.instance.settings.reserve;
       const random = mulberry32(e.slots.length * 7919 + n);
-      for (const phase of [1, 2] as const) {
-        const master = new Master(highs, n, need, { min, max: max ?? n });
+      const FLOOR = 0.6;
+      for (const variant of ["open time", "wishes", "wishes with a floor", "open time with a reserve line required"] as const) {
+        const phase = variant.startsWith("open time") ? 1 : 2;
+        const floor = variant === "wishes with a floor";
+        const reserve = variant === "open time with a reserve line required" ? { min: Math.max(1, min), max: max ?? n } : { min, max: max ?? n };
+        const master = new Master(highs, n, need, reserve);
         try {
           master.setCoverageObjective(openCost);
-          if (phase === 2) master.setWishObjective(openCost, brute.openCost + 1e-9, () => 0);
-          const optimum = phase === 1 ? -brute.openCost : brute.objective;
+          if (phase === 2) {
+            master.setWishObjective(openCost, brute.openCost + 1e-9, () => 0, floor ? { floor: FLOOR, penalty: 100, coefficient: () => 0, crewCount: n } : undefined);
+          }
+          // Every enumerated line in the master, so that its LP optimum z* is the LP over all lines.
+          const sigma = (i: number, score: number) => score / e.crew[i]!.best;
+          e.crew.forEach((x, i) => {
+            master.add({ crew: i, pairings: [], reserve: true, score: 0 }, 0, 0);
+            for (const l of x.lines) {
+              master.add({ crew: i, pairings: l.pairings, reserve: false, score: l.score }, phase === 2 ? brute.weights[i]! * sigma(i, l.score) : 0, floor ? sigma(i, l.score) : 0);
+            }
+          });
+          const lp = master.solveLp(60, () => false);
+          expect(lp.status, `${c.name}, ${variant}`).toBe("optimal");
+          const zStar = lp.objective;
+          if (variant !== "wishes with a floor" && reserve.min === min && !(zStar >= (phase === 1 ? -brute.openCost : brute.objective) - 1e-7)) problems.push(`${c.name}, ${variant}: LP ${zStar} below the brute-force optimum`);
           const lineValue = (y: Float64Array, i: number) =>
             Math.max(
               ...e.crew[i]!.lines.map((l) => {
-                let v = phase === 2 ? (brute.weights[i]! * l.score) / e.crew[i]!.best : 0;
+                let v = phase === 2 ? brute.weights[i]! * sigma(i, l.score) : 0;
+                if (floor) v -= y[master.fairRow[i]!]! * sigma(i, l.score);
                 for (const k of l.pairings) v -= y[master.coverRow.get(k)!]!;
                 return v;
               }),
             );
+          const bound = (y: Float64Array) => master.lagrangianBound(y, e.crew.map((_, i) => lineValue(y, i)));
+          // At the LP's own duals the bound is the LP optimum (strong duality): this pins every sign and term.
+          const atLp = bound(master.project(master.duals()));
+          if (!(Math.abs(atLp - zStar) <= 1e-6)) problems.push(`${c.name}, ${variant}: L(y*) = ${atLp} at the LP's duals, LP optimum ${zStar}`);
           for (let trial = 0; trial < 300; trial++) {
             const scale = [0.01, 1, 30, 1000][trial % 4]!;
             const raw = Float64Array.from({ length: master.rowCount }, () => (random() * 2 - 1) * scale);
             if (master.coverageRow >= 0) raw[master.coverageRow] = (random() * 2 - 1) * (scale / 100);
-            const y = master.project(raw);
-            const bound = master.lagrangianBound(y, e.crew.map((_, i) => lineValue(y, i)));
-            if (!(bound >= optimum - 1e-9)) problems.push(`${c.name}, phase ${phase}, trial ${trial}: L(y) = ${bound} below the optimum ${optimum}`);
+            const value = bound(master.project(raw));
+            if (!(value >= zStar - 1e-7)) problems.push(`${c.name}, ${variant}, trial ${trial}: L(y) = ${value} below the LP optimum ${zStar}`);
           }
-          // At zero duals it is each crew member's best line alone: Σ W_i in phase 2, and 0 open in phase 1.
+          // At zero duals it is each crew member's best line alone: Σ W_i for wishes, and 0 open in phase 1.
           const zero = new Float64Array(master.rowCount);
-          const atZero = master.lagrangianBound(zero, e.crew.map((_, i) => lineValue(zero, i)));
           const expected = phase === 1 ? 0 : brute.weights.reduce((t, w) => t + w, 0);
-          if (!(Math.abs(atZero - expected) <= 1e-9)) problems.push(`${c.name}, phase ${phase}: L(0) = ${atZero}, expected ${expected}`);
+          if (!(Math.abs(bound(zero) - expected) <= 1e-9)) problems.push(`${c.name}, ${variant}: L(0) = ${bound(zero)}, expected ${expected}`);
         } finally {
           master.dispose();
         }
