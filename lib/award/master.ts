@@ -287,10 +287,7 @@ export class Master {
    */
   lagrangianBound(y: Float64Array, line: readonly number[]): number {
     let total = 0;
-    this.crewRow.forEach((_, i) => {
-      const reserveValue = this.reserveRow >= 0 ? -y[this.reserveRow]! : 0;
-      total += Math.max(line[i]!, reserveValue);
-    });
+    this.crewRow.forEach((_, i) => (total += this.crewTerm(y, line[i]!)));
     const crewRows = new Set(this.crewRow);
     this.rowBounds.forEach(([lo, hi], r) => {
       if (crewRows.has(r)) return;
@@ -308,6 +305,11 @@ export class Master {
       for (const r of this.fairRow) total += floor * Math.max(0, -penalty - y[r]!);
     }
     return total;
+  }
+
+  /** A crew member's term in `lagrangianBound`: their best line value at y, or their reserve line's if higher. */
+  crewTerm(y: Float64Array, line: number): number {
+    return Math.max(line, this.reserveRow >= 0 ? -y[this.reserveRow]! : 0);
   }
 
   /** Values of the master columns in the last solve. */

@@ -311,8 +311,9 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
             exhausted &&= r.exhausted;
             line.push(r.upperBound + offset);
             const weight = scoreWeight(i, y);
+            const offsetNow = lineOffset(i, y);
             for (const l of r.lines) {
-              let profit = weight * l.score - yi + lineOffset(i, y);
+              let profit = weight * l.score - yi + offsetNow;
               for (const k of l.pairings) profit -= current[k]!;
               if (profit <= TOL) continue;
               if (addColumn({ crew: i, pairings: l.pairings, reserve: false, score: l.score })) added++;
@@ -381,7 +382,6 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       else if (exhausted && bounded && mip.status === "optimal") {
         const gapAbs = bounded.value - mip.objective;
         const { y, line } = bounded;
-        const reserveValue = master.reserveRow >= 0 ? -y[master.reserveRow]! : 0;
         const cost = pairingCosts(y);
         let complete = true;
         let added = 0;
@@ -392,7 +392,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
               break;
             }
             const cap = options.closingLines ?? 400;
-            const term = Math.max(line[i]!, reserveValue);
+            const term = master.crewTerm(y, line[i]!);
             const r = priceLines(problem, c, { scoreWeight: scoreWeight(i, y), cost, threshold: term - gapAbs - TOL - lineOffset(i, y), maxLines: cap, nodeLimit: nodeLimit * 5 });
             if (!r.exhausted || r.lines.length >= cap) complete = false;
             for (const l of r.lines) if (addColumn({ crew: i, pairings: l.pairings, reserve: false, score: l.score })) added++;
