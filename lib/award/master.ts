@@ -6,6 +6,7 @@
  *     min ≤ Σ_i λ_i,reserve ≤ max          reserve row, when the settings bound it
  *     Σ_p c_p u_p ≤ U*                     coverage row (phase 2)
  *     Σ_ℓ σ_iℓ λ_iℓ + f_i ≥ φ              fairness row i (phase 2 with a floor; f_i ≥ 0 penalised)
+ *     Σ_ℓ s_iℓ λ_iℓ ≥ S*_i − ε             score floor of crew i (strict seniority, once i's step is done)
  *
  * Columns are appended as they are generated; rows keep their order, so the
  * duals of one solve price the next round. HiGHS reports, for a maximisation,
@@ -53,6 +54,10 @@ export class Master {
   coverageRow = -1;
   readonly fairRow: number[] = [];
   readonly fairCol: number[] = [];
+  /** strict seniority: the score-floor row of each crew member whose step is done */
+  readonly floorRow: number[] = [];
+  /** master column indices of each crew member's columns */
+  private readonly crewColumns: number[][];
   /** [lower, upper] of every row */
   private readonly rowBounds: [number, number][];
   /** objective coefficient of each open-time column u_p (phase 1: −c_p; phase 2: 0) and the coverage row's c_p */
@@ -67,6 +72,7 @@ export class Master {
     private readonly need: ReadonlyMap<number, number>,
     reserve: { min: number; max: number },
   ) {
+    this.crewColumns = Array.from({ length: crewCount }, () => []);
     this.model = highs.createModel();
     this.model.options.set({ output_flag: false, random_seed: 0 });
     const rowLower: number[] = [];
@@ -165,9 +171,37 @@ export class Master {
       indices.push(fair);
       values.push(fairness);
     }
+    const floor = this.floorRow[column.crew];
+    if (floor !== undefined && !column.reserve && column.score !== 0) {
+      indices.push(floor);
+      values.push(column.score);
+    }
     this.colIndex.push(this.addRawCol(cost, 0, Infinity, indices, values));
+    this.crewColumns[column.crew]!.push(this.columns.length);
     this.columns.push(column);
     return true;
+  }
+
+  /**
+   * Strict seniority: crew member i keeps a score of at least `lower` from now
+   * on (Σ_ℓ s_iℓ λ_iℓ ≥ lower over i's columns, present and future; reserve scores 0).
+   */
+  addFloorRow(i: number, lower: number): void {
+    if (this.floorRow[i] !== undefined) throw new AppError("internal", `crew ${i} has a score floor already`);
+    const indices: number[] = [];
+    const values: number[] = [];
+    for (const k of this.crewColumns[i]!) {
+      const column = this.columns[k]!;
+      if (column.reserve || column.score === 0) continue;
+      indices.push(this.colIndex[k]!);
+      values.push(column.score);
+    }
+    this.floorRow[i] = this.addRawRow(lower, Infinity, indices, values);
+  }
+
+  /** Sets the objective coefficient of each of crew member i's columns. */
+  setCrewCosts(i: number, cost: (column: MasterColumn) => number): void {
+    for (const k of this.crewColumns[i]!) this.model.changeColCost(this.colIndex[k]!, cost(this.columns[k]!));
   }
 
   /** Phase 1's objective: maximise −Σ c_p u_p, every line worth 0. */

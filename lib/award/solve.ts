@@ -67,8 +67,10 @@ export interface AwardReport {
   lpBound: number;
   /** (lpBound − objective) / max(1, |lpBound|) */
   gap: number;
-  /** the integer solve is proven optimal over all legal lines */
+  /** the integer solve is proven optimal over all legal lines (strict: every step proven) */
   provenOptimal: boolean;
+  /** strict seniority: how many steps each kind of certificate settled */
+  strictSteps?: Partial<Record<StrictCertificate["method"], number>>;
   /** neighbourhoods re-solved after each phase's integer solve (improve.ts), and how many improved the award */
   neighbourhoods?: Record<"coverage" | "wishes", { tried: number; improved: number }>;
   illegalPairings: { pairingId: string; text: string }[];
@@ -86,6 +88,36 @@ export interface AwardReport {
    */
   finalDuals?: { crew: Record<string, number>; pairings: Record<string, number>; scoreCoefficient: Record<string, number> };
 }
+
+/**
+ * Strict seniority: why crew member k's score S*_k is the best possible given
+ * the coverage and every more senior crew member's settled score, stored on
+ * their awarded line (`certificate`). `bound` ≥ `score` bounds every award
+ * that keeps the coverage and the seniors' floors:
+ * - "no-legal-line": no line-holder line is legal for them (score 0);
+ * - "best-alone": `bound` is their best line with every pairing free
+ *   (an exhausted search), and `score` reaches it;
+ * - "lp": `bound` is the step's master LP optimum over every line of everyone
+ *   (column generation ran until pricing found nothing);
+ * - "lagrangian": `bound` is a Lagrangian bound of the step (valid at any
+ *   duals; Master.lagrangianBound);
+ * - "enumeration": the integer solve was repeated over every line that
+ *   could be part of a better award (gap closing), so `score` is optimal;
+ * - "unproven": a limit stopped the step; `bound` is the best bound known.
+ * `step` is the crew member's place in the sequence (1 = most senior).
+ */
+export interface StrictCertificate {
+  step: number;
+  method: "no-legal-line" | "best-alone" | "lp" | "lagrangian" | "enumeration" | "unproven";
+  score: number;
+  bound: number;
+}
+
+const countSteps = (certificates: readonly StrictCertificate[]) => {
+  const counts: Partial<Record<StrictCertificate["method"], number>> = {};
+  for (const c of certificates) counts[c.method] = (counts[c.method] ?? 0) + 1;
+  return counts;
+};
 
 export interface AwardResult {
   award: Assembled["award"];
@@ -105,6 +137,17 @@ const SMOOTHING = 0.5;
 const SURPLUS = 2;
 /** per unit of satisfaction below the floor, in units of W (large against any W_i) */
 const FAIRNESS_PENALTY = 100;
+/**
+ * Strict seniority: a settled crew member's floor is S*_i − FLOOR_MARGIN, so that
+ * HiGHS's tolerances never make a later step infeasible; scores are sums of
+ * wish weights 0.8^r (DESIGN.md), and lines whose scores differ by less than
+ * this are taken as equally good.
+ */
+const FLOOR_MARGIN = 1e-6;
+/** a strict step may use up to this many times its even share of the time left */
+const STEP_SHARE = 3;
+/** a strict step's score reaches a bound within this (the floors' margin with room for HiGHS's tolerances) */
+const SCORE_TOL = 2 * FLOOR_MARGIN;
 
 class Clock {
   readonly times: Record<string, number> = {};
@@ -124,6 +167,10 @@ class Clock {
       this.times[name] = (this.times[name] ?? 0) + (performance.now() - start);
     }
   }
+  /** the share of the time limit that will have gone `seconds` from now */
+  shareAfter(seconds: number): number {
+    return this.limitMs > 0 ? (performance.now() - this.t0 + seconds * 1000) / this.limitMs : 1;
+  }
   /** seconds left before `share` of the time limit has gone (1: the whole limit) */
   remainingSeconds(share = 1): number {
     return Math.max(0, (this.limitMs * share - (performance.now() - this.t0)) / 1000);
@@ -135,9 +182,7 @@ class Clock {
 
 export async function solveAward(instance: Instance, options: AwardOptions = {}): Promise<AwardResult> {
   const settings = instance.settings;
-  if (settings.mode !== "balanced") {
-    throw new AppError("invalid", `settings.mode is "${settings.mode}"; this engine awards in "balanced" mode only (strict seniority comes with part 2 of the award engine)`);
-  }
+  const strict = settings.mode === "strict";
   const clock = new Clock(settings.timeLimitSeconds * 1000);
   const nodeLimit = options.nodeLimit ?? 20_000;
   const quickNodes = Math.min(nodeLimit, options.quickNodeLimit ?? 1_000);
@@ -204,9 +249,14 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       col.reserve ? 0 : best[col.crew]! <= 0 ? 1 : Math.min(1, col.score / best[col.crew]!);
     const wishCoefficient = (col: Pick<MasterColumn, "crew" | "score" | "reserve">) =>
       col.reserve || best[col.crew]! <= 0 ? 0 : problem.crew[col.crew]!.weight * fairnessCoefficient(col);
-    let phase: "coverage" | "wishes" = "coverage";
-    const addColumn = (col: MasterColumn) =>
-      master.add(col, phase === "coverage" ? tieBreak * wishCoefficient(col) : wishCoefficient(col), phase === "wishes" ? fairnessCoefficient(col) : 0);
+    let phase: "coverage" | "wishes" | "strict" = "coverage";
+    // Strict seniority: the crew member whose score the current step maximises, and the scores S*_i settled so far.
+    let stepCrew = -1;
+    const settled: number[] = [];
+    const strictCost = (col: Pick<MasterColumn, "crew" | "score" | "reserve">) => (col.crew === stepCrew && !col.reserve ? col.score : 0);
+    const costOf = (col: MasterColumn) =>
+      phase === "coverage" ? tieBreak * wishCoefficient(col) : phase === "wishes" ? wishCoefficient(col) : strictCost(col);
+    const addColumn = (col: MasterColumn) => master.add(col, costOf(col), phase === "wishes" ? fairnessCoefficient(col) : 0);
 
     problem.crew.forEach((_, i) => addColumn({ crew: i, pairings: [], reserve: true, score: 0 }));
     problem.crew.forEach((c, i) => {
@@ -229,7 +279,8 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       progress("prepare", 8, "A small group: solving it whole with the compact model as well");
       const seconds = Math.min(COMPACT_SECONDS, clock.remainingSeconds(0.2));
       const started = performance.now();
-      const compact = await compactMipAward(instance, { timeLimitSeconds: seconds, shouldStop: cancelled });
+      // (In strict mode too: its balanced award is one more set of legal lines for the master.)
+      const compact = await compactMipAward(strict ? { ...instance, settings: { ...settings, mode: "balanced" } } : instance, { timeLimitSeconds: seconds, shouldStop: cancelled });
       clock.times.compact = performance.now() - started;
       const crewIndex = new Map(problem.crew.map((c, i) => [c.crew.id, i]));
       const pairingIndex = new Map(problem.pairings.map((p, k) => [p.id, k]));
@@ -327,8 +378,13 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         const value = complete ? master.lagrangianBound(at, line) : Infinity;
         if (value < (bounded?.value ?? Infinity)) bounded = { y: at, line, value };
         const fraction = Math.min(1, round / 30);
-        progress(phase, from + (to - from) * fraction, `${phase === "coverage" ? "Covering the trips" : "Granting wishes"}: round ${rounds}, ${master.columns.length} lines, LP ${lp.objective.toFixed(3)}`);
-        if (rounds >= roundLimit) {
+        progress(
+          phase === "coverage" ? "coverage" : "wishes",
+          from + (to - from) * fraction,
+          `${phase === "coverage" ? "Covering the trips" : phase === "wishes" ? "Granting wishes" : `Seniority ${problem.crew[stepCrew]!.crew.seniority}`}: round ${rounds}, ${master.columns.length} lines, LP ${lp.objective.toFixed(3)}`,
+        );
+        // (Strict seniority counts the limit per step.)
+        if ((phase === "strict" ? round + 1 : rounds) >= roundLimit) {
           stoppedBy = "iteration-limit";
           return result(lp, false);
         }
@@ -363,6 +419,11 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     const scoreWeight = (i: number, y: Float64Array) => {
       if (best[i]! <= 0) return 0;
       if (phase === "coverage") return (tieBreak * problem.crew[i]!.weight) / best[i]!;
+      if (phase === "strict") {
+        // c_ℓ = s_ℓ for the step's crew member, 0 for everyone else; a settled senior's floor row adds −y_floor·s_ℓ.
+        const floorRow = master.floorRow[i];
+        return (i === stepCrew ? 1 : 0) - (floorRow === undefined ? 0 : y[floorRow]!);
+      }
       const fair = master.fairRow[i];
       const yf = fair === undefined ? 0 : y[fair]!;
       return (problem.crew[i]!.weight - yf) / best[i]!;
@@ -424,13 +485,16 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       if (cols.length !== n || new Set(cols.map((col) => col.crew)).size !== n) return false;
       if ([...openAfter(cols).values()].some((open) => open < 0)) return false;
       const reserves = cols.filter((col) => col.reserve).length;
+      if (cols.some((col) => settled[col.crew] !== undefined && (col.reserve ? 0 : col.score) < settled[col.crew]! - FLOOR_MARGIN - 1e-9)) return false;
       return reserves >= reserveMin && reserves <= reserveMax && coverageOf(cols) <= coverageLimit;
     };
     /** The phase's objective of a full solution (larger is better). */
     const value = (cols: readonly MasterColumn[]) =>
       phase === "coverage"
         ? -coverageOf(cols) + tieBreak * cols.reduce((t, col) => t + wishCoefficient(col), 0)
-        : cols.reduce((t, col) => t + wishCoefficient(col), 0);
+        : phase === "wishes"
+          ? cols.reduce((t, col) => t + wishCoefficient(col), 0)
+          : cols.reduce((t, col) => t + strictCost(col), 0);
     const chosenColumns = () => {
       const x = master.values();
       return master.columns.filter((_, k) => x[k]! > 0.5);
@@ -483,37 +547,118 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     // Coverage is proven optimal by phase 1's own proof, or by an award that leaves nothing open.
     const coverageProven = cover1.proven || [...openAfter(cover1.chosen).values()].every((open) => open === 0);
 
-    // Phase 2: wishes with the coverage kept.
-    phase = "wishes";
-    const floor = settings.fairnessFloor;
     coverageLimit = coverage + 1e-7; // HiGHS's primal feasibility tolerance; looser lets the LP bound drift
-    master.setWishObjective(
-      openCost,
-      coverageLimit,
-      (col) => wishCoefficient(col),
-      floor !== undefined ? { floor, penalty: FAIRNESS_PENALTY, coefficient: fairnessCoefficient, crewCount: n } : undefined,
-    );
-    const wishStart = compactColumns && feasible(compactColumns) && value(compactColumns) > value(cover1.chosen) + 1e-9 ? compactColumns : cover1.chosen;
-    // A start that gives everyone their best line alone cannot be beaten: phase 2 has nothing to do.
-    const reachable = problem.crew.reduce((t, c, i) => t + (best[i]! > 0 ? c.weight : 0), 0);
-    const atBest = value(wishStart) >= reachable - 1e-9 * Math.max(1, reachable);
-    share = 0.5;
-    const wishes: { bound: number; bounded?: Bounded; exhausted: boolean } = atBest ? { bound: reachable, exhausted: false } : generate(45, 75);
-    share = 0.55;
-    progress("integer", 78, "Choosing one line per crew member");
-    const final: { proven: boolean; chosen: MasterColumn[] } = atBest ? { proven: false, chosen: wishStart } : integer(wishes.bound, wishes.bounded, wishes.exhausted, wishStart);
-    share = 1;
-    if (!atBest && !final.proven && !stop()) {
-      progress("integer", 88, "Improving the award a few crew members at a time");
-      const improvedAward = clock.phase("neighbourhoods", () =>
-        improveByNeighbourhoods({
-          ...neighbourhoodInput(final.chosen),
-          ...(floor !== undefined ? { fairness: { floor, penalty: FAIRNESS_PENALTY, coefficient: fairnessCoefficient } } : {}),
-        }),
+
+    /**
+     * Strict seniority (AWARD-MODEL.md): in seniority order, crew member k's
+     * score is maximised over every award that keeps the coverage and every
+     * settled senior's score (a floor S*_i − FLOOR_MARGIN, not a fixed line),
+     * then settled. Each step is as cheap as its evidence allows:
+     *
+     * 1. the incumbent already gives k their best line alone (proven by the
+     *    exhausted search of pricing.ts) — nothing can be better;
+     * 2. the integer solve on the lines generated so far, from the incumbent,
+     *    reaches k's best line alone — the witness is that award;
+     * 3. else column generation on the step's master bounds k's score over
+     *    every line of everyone; an integer solve that meets the bound is
+     *    optimal, and otherwise the gap is closed as in balanced mode (every
+     *    line that could be part of a better award is enumerated).
+     *
+     * Every step starts from the previous step's award, which meets all the
+     * floors, and the master keeps its lines and basis from step to step.
+     */
+    const strictSteps = () => {
+      phase = "strict";
+      master.setWishObjective(openCost, coverageLimit, () => 0);
+      let incumbent = [...cover1.chosen].sort((x, y) => x.crew - y.crew);
+      const certificates: StrictCertificate[] = [];
+      const scoreOf = (col: MasterColumn) => (col.reserve ? 0 : col.score);
+      for (let k = 0; k < n; k++) {
+        if (cancelled()) break;
+        stepCrew = k;
+        master.setCrewCosts(k, strictCost);
+        const had = scoreOf(incumbent[k]!);
+        share = Math.min(1, clock.shareAfter(clock.remainingSeconds(1) * Math.min(1, STEP_SHARE / (n - k))));
+        const from = 45 + (50 * k) / n;
+        progress("wishes", from, `Seniority ${problem.crew[k]!.crew.seniority}: ${k} of ${n} crew settled`);
+        let certificate: StrictCertificate;
+        if (best[k]! <= 0) {
+          certificate = { step: k + 1, method: "no-legal-line", score: 0, bound: 0 };
+        } else if (alone.exhausted[k] && had >= best[k]! - SCORE_TOL) {
+          certificate = { step: k + 1, method: "best-alone", score: had, bound: best[k]! };
+        } else {
+          const first = integer(Infinity, undefined, false, incumbent);
+          let chosen = first.chosen;
+          let z = value(chosen);
+          if (alone.exhausted[k] && z >= best[k]! - SCORE_TOL) {
+            certificate = { step: k + 1, method: "best-alone", score: z, bound: best[k]! };
+          } else {
+            const step = generate(from, from + 50 / n);
+            if (z >= step.bound - SCORE_TOL) {
+              certificate = { step: k + 1, method: step.exhausted ? "lp" : "lagrangian", score: z, bound: step.bound };
+            } else {
+              const closed = integer(step.bound, step.bounded, step.exhausted, chosen);
+              if (value(closed.chosen) >= z) chosen = closed.chosen;
+              z = value(chosen);
+              certificate = closed.proven
+                ? { step: k + 1, method: "enumeration", score: z, bound: z }
+                : { step: k + 1, method: "unproven", score: z, bound: Math.max(z, step.bound) };
+            }
+          }
+          incumbent = [...chosen].sort((x, y) => x.crew - y.crew);
+        }
+        certificates.push(certificate);
+        stepCrew = -1;
+        master.setCrewCosts(k, strictCost);
+        const settledScore = scoreOf(incumbent[k]!);
+        settled[k] = settledScore;
+        if (settledScore > 0) master.addFloorRow(k, settledScore - FLOOR_MARGIN);
+      }
+      share = 1;
+      if (certificates.length < n) noteStop();
+      return { chosen: incumbent, certificates };
+    };
+
+    // Phase 2, balanced: wishes with the coverage kept.
+    const balancedWishes = () => {
+      phase = "wishes";
+      const floor = settings.fairnessFloor;
+      master.setWishObjective(
+        openCost,
+        coverageLimit,
+        (col) => wishCoefficient(col),
+        floor !== undefined ? { floor, penalty: FAIRNESS_PENALTY, coefficient: fairnessCoefficient, crewCount: n } : undefined,
       );
-      neighbourhoods = { tried: improvedAward.tried, improved: improvedAward.improved };
-      if (improvedAward.improved > 0 && feasible(improvedAward.columns)) final.chosen = improvedAward.columns;
-    }
+      const wishStart = compactColumns && feasible(compactColumns) && value(compactColumns) > value(cover1.chosen) + 1e-9 ? compactColumns : cover1.chosen;
+      // A start that gives everyone their best line alone cannot be beaten: phase 2 has nothing to do.
+      const reachable = problem.crew.reduce((t, c, i) => t + (best[i]! > 0 ? c.weight : 0), 0);
+      const atBest = value(wishStart) >= reachable - 1e-9 * Math.max(1, reachable);
+      share = 0.5;
+      const wishes: { bound: number; bounded?: Bounded; exhausted: boolean } = atBest ? { bound: reachable, exhausted: false } : generate(45, 75);
+      share = 0.55;
+      progress("integer", 78, "Choosing one line per crew member");
+      const final: { proven: boolean; chosen: MasterColumn[] } = atBest ? { proven: false, chosen: wishStart } : integer(wishes.bound, wishes.bounded, wishes.exhausted, wishStart);
+      share = 1;
+      if (!atBest && !final.proven && !stop()) {
+        progress("integer", 88, "Improving the award a few crew members at a time");
+        const improvedAward = clock.phase("neighbourhoods", () =>
+          improveByNeighbourhoods({
+            ...neighbourhoodInput(final.chosen),
+            ...(floor !== undefined ? { fairness: { floor, penalty: FAIRNESS_PENALTY, coefficient: fairnessCoefficient } } : {}),
+          }),
+        );
+        neighbourhoods = { tried: improvedAward.tried, improved: improvedAward.improved };
+        if (improvedAward.improved > 0 && feasible(improvedAward.columns)) final.chosen = improvedAward.columns;
+      }
+      return { wishes, final, atBest };
+    };
+
+    const floor = strict ? undefined : settings.fairnessFloor;
+    if (strict && settings.fairnessFloor !== undefined) warnings.push("the fairness floor applies in balanced mode only; strict seniority leaves it aside");
+    const strictResult = strict ? strictSteps() : undefined;
+    const balanced = strict ? undefined : balancedWishes();
+    const final = strictResult ?? balanced!.final;
+    const atBest = balanced?.atBest ?? false;
 
     // The award.
     const byCrew = new Map(final.chosen.map((col) => [col.crew, col]));
@@ -523,6 +668,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       return { reserve: col.reserve, pairings: col.pairings };
     });
     const assembled = clock.phase("assemble", () => assembleAward(problem, choices, best));
+    strictResult?.certificates.forEach((cert, i) => (assembled.award.lines[i]!.certificate = { ...cert }));
     const fairnessShortfalls =
       floor === undefined
         ? []
@@ -532,7 +678,14 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     const objective = assembled.weightedSatisfaction - penalty;
     // Every satisfaction is at most 1, so Σ_i W_i bounds the objective too (the weaker pricing bounds can exceed it).
     const allSatisfied = problem.crew.reduce((t, c) => t + c.weight, 0);
-    const lpBound = Math.max(objective, Math.min(allSatisfied, wishes.bound + constant));
+    // Strict: each crew member's satisfaction is at most their step's bound over best_i (1 for crew not reached).
+    const strictBound = strictResult
+      ? problem.crew.reduce((t, c, i) => {
+          const cert = strictResult.certificates[i];
+          return t + c.weight * (best[i]! <= 0 || !cert ? 1 : Math.min(1, cert.bound / best[i]!));
+        }, 0)
+      : 0;
+    const lpBound = strictResult ? Math.max(objective, strictBound) : Math.max(objective, Math.min(allSatisfied, balanced!.wishes.bound + constant));
     const everyoneAtBest = objective >= allSatisfied - 1e-9 * Math.max(1, allSatisfied);
     const gap = Number.isFinite(lpBound) ? (lpBound - objective) / Math.max(1, Math.abs(lpBound)) : Infinity;
     const y = lastDuals;
@@ -561,14 +714,17 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         objective,
         lpBound,
         gap,
-        provenOptimal: coverageProven && ((everyoneAtBest && alone.exhausted.every(Boolean)) || (wishes.exhausted && final.proven)),
+        provenOptimal: strictResult
+          ? coverageProven && strictResult.certificates.length === n && strictResult.certificates.every((c) => c.method !== "unproven")
+          : coverageProven && ((everyoneAtBest && alone.exhausted.every(Boolean)) || (balanced!.wishes.exhausted && balanced!.final.proven)),
+        ...(strictResult ? { strictSteps: countSteps(strictResult.certificates) } : {}),
         neighbourhoods: { coverage: coverNeighbourhoods, wishes: neighbourhoods },
         illegalPairings: problem.illegal,
         fairnessShortfalls,
         best: Object.fromEntries(problem.crew.map((c, i) => [c.crew.id, best[i]!])),
         weights: Object.fromEntries(problem.crew.map((c) => [c.crew.id, c.weight])),
         warnings,
-        ...(atBest ? {} : { finalDuals }),
+        ...(atBest || strict ? {} : { finalDuals }),
       },
     };
   } finally {

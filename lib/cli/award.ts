@@ -1,9 +1,11 @@
 /**
- * `npm run award -- <instance.json> [--mode balanced] [--time-limit 600] [--out award.json]`:
+ * `npm run award -- <instance.json> [--mode strict|balanced] [--time-limit 600] [--out award.json]`:
  * awards an instance (or every instance of a bundle) with the column-generation
  * engine in a worker thread, shows a progress bar on a terminal, and prints a
  * summary per award group: coverage, open time, satisfaction, Jain's index, gap
- * and time. `--method greedy` runs the greedy baseline instead. A bad file gets
+ * and time; in strict mode, how each crew member's score was certified.
+ * `--mode` overrides the instance's own mode (settings.mode).
+ * `--method greedy` runs the greedy baseline instead. A bad file gets
  * an error naming the path of the bad field.
  */
 import fs from "node:fs";
@@ -13,7 +15,7 @@ import { awardGroupKey, bundleSchema, instanceSchema, isAppError, type Instance 
 import { greedyAward, solveAwardInThread, type AwardResult } from "../award/index.ts";
 import { fairnessReport } from "../fairness/index.ts";
 
-const USAGE = `usage: npm run award -- <instance-or-bundle.json> [--mode balanced] [--time-limit SECONDS] [--method column-generation|greedy] [--out FILE.json]`;
+const USAGE = `usage: npm run award -- <instance-or-bundle.json> [--mode strict|balanced] [--time-limit SECONDS] [--method column-generation|greedy] [--out FILE.json]`;
 
 function fail(message: string, code = 2): never {
   console.error(`award: ${message}`);
@@ -26,7 +28,7 @@ try {
   parsed = parseArgs({
     allowPositionals: true,
     options: {
-      mode: { type: "string", default: "balanced" },
+      mode: { type: "string" },
       "time-limit": { type: "string" },
       method: { type: "string", default: "column-generation" },
       out: { type: "string" },
@@ -43,7 +45,8 @@ if (values.help) {
 }
 if (positionals.length !== 1) fail("name one instance or bundle file");
 const file = positionals[0]!;
-if (values.mode !== "balanced") fail(`--mode ${values.mode}: only "balanced" is available so far (strict seniority comes with part 2 of the engine)`);
+const mode = values.mode;
+if (mode !== undefined && mode !== "strict" && mode !== "balanced") fail(`--mode must be strict or balanced, not "${mode}"`);
 if (values.method !== "column-generation" && values.method !== "greedy") fail(`--method must be column-generation or greedy, not "${values.method}"`);
 const timeLimit = values["time-limit"] === undefined ? undefined : Number(values["time-limit"]);
 if (timeLimit !== undefined && !(timeLimit > 0 && timeLimit <= 86_400)) fail(`--time-limit must be a number of seconds in (0, 86400], not "${values["time-limit"]}"`);
@@ -88,7 +91,7 @@ const results: { group: string; result: AwardResult }[] = [];
 for (const original of instances) {
   const instance: Instance = {
     ...original,
-    settings: { ...original.settings, mode: "balanced", ...(timeLimit !== undefined ? { timeLimitSeconds: timeLimit } : {}) },
+    settings: { ...original.settings, ...(mode ? { mode } : {}), ...(timeLimit !== undefined ? { timeLimitSeconds: timeLimit } : {}) },
   };
   const group = awardGroupKey(instance.group);
   const t0 = performance.now();
@@ -109,12 +112,16 @@ for (const original of instances) {
   const positions = instance.pairings.reduce((t, p) => t + (p.crewNeeded[instance.group.position] ?? 0), 0);
   const { report, stats } = result;
   const reserve = result.award.lines.filter((l) => l.kind === "reserve").length;
-  console.log(`${group} — ${instance.crew.length} crew, ${instance.pairings.length} pairings (${values.method})`);
+  console.log(`${group} — ${instance.crew.length} crew, ${instance.pairings.length} pairings (${values.method}${values.method === "greedy" ? "" : `, ${instance.settings.mode}`})`);
   console.log(`  coverage      ${positions - report.openPositions} of ${positions} positions; open time ${hours(report.openCreditMinutes)} in ${report.openPositions} positions${report.illegalPairings.length ? ` (${report.illegalPairings.length} pairings illegal in themselves)` : ""}`);
   console.log(`  satisfaction  mean ${fairness.mean.toFixed(3)}, minimum ${fairness.min.toFixed(3)}; Jain ${fairness.jain.toFixed(3)}, Gini ${fairness.gini.toFixed(3)}; ${reserve} on reserve`);
   if (report.method !== "greedy") {
     const gap = Number.isFinite(report.gap) ? `${(report.gap * 100).toFixed(2)} %` : "unknown (no bound)";
     console.log(`  solver        objective ${report.objective.toFixed(4)}, LP bound ${report.lpBound.toFixed(4)}, gap ${gap}${report.provenOptimal ? " (proven optimal)" : ""}; ${stats.columns} lines, ${stats.rounds} pricing rounds; stopped by ${stats.stoppedBy}`);
+  }
+  if (report.strictSteps) {
+    const steps = Object.entries(report.strictSteps).map(([method, count]) => `${method} ${count}`).join(", ");
+    console.log(`  seniority     each crew member's score certified by: ${steps}`);
   }
   console.log(`  time          ${seconds.toFixed(1)} s`);
   for (const w of report.warnings) console.log(`  note          ${w}`);

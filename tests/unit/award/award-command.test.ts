@@ -43,10 +43,20 @@ describe("npm run award", () => {
     expect(r.stderr).toContain("pairings[2].dutyPeriods[0].report");
   }, 60_000);
 
-  it("refuses strict mode until it exists, saying so", () => {
+  it("awards in strict seniority with --mode strict, saying how each score was certified", () => {
+    const { file, instance } = tinyFile(dir);
+    const out = path.join(dir, "strict.json");
+    const text = execFileSync(tsx, ["lib/cli/award.ts", file, "--mode", "strict", "--out", out], { encoding: "utf8" });
+    expect(text).toContain(", strict)");
+    expect(text).toMatch(/seniority\s+each crew member's score certified by: [a-z-]+ \d+/);
+    const written = JSON.parse(fs.readFileSync(out, "utf8")) as { award: { lines: { certificate?: { step: number } }[] } };
+    expect(written.award.lines.map((l) => l.certificate?.step)).toEqual(instance.crew.map((_, k) => k + 1));
+  }, 120_000);
+
+  it("refuses an unknown mode, saying which ones exist", () => {
     const { file } = tinyFile(dir);
-    const r = spawnSync(tsx, ["lib/cli/award.ts", file, "--mode", "strict"], { encoding: "utf8" });
+    const r = spawnSync(tsx, ["lib/cli/award.ts", file, "--mode", "fastest"], { encoding: "utf8" });
     expect(r.status).toBe(2);
-    expect(r.stderr).toMatch(/only "balanced"/);
+    expect(r.stderr).toMatch(/--mode must be strict or balanced/);
   }, 60_000);
 });

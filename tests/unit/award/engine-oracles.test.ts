@@ -20,35 +20,14 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { solveAward, type AwardResult } from "@/lib/award";
 import { mulberry32 } from "@/lib/award/improve";
 import { loadHighs, Master } from "@/lib/award/master";
-import { instanceSchema, instantMs, satisfaction, type Instance } from "@/lib/domain";
-import { generatePeriod } from "@/seed/generator/generate-period";
+import { instantMs, satisfaction, type Instance } from "@/lib/domain";
 import type { GeneratorInput } from "@/seed/generator/params";
 import { bruteForce, type BruteForceResult } from "./oracle/brute-force.ts";
 import { enumerateLines, oracleWeight, type Enumeration } from "./oracle/enumerate-lines.ts";
+import { tinyInstance, type Variant } from "./oracle/tiny-instance.ts";
 
 // munkres-js is CommonJS without type declarations: computeMunkres(costMatrix) → [row, column] pairs of a least-cost assignment.
 const munkres = createRequire(import.meta.url)("munkres-js") as (cost: number[][]) => [number, number][];
-
-interface Variant {
-  minCreditMinutes: number;
-  maxCreditMinutes: number;
-  reserve?: { min: number; max?: number };
-}
-
-/** A generated period for one position, its credit window replaced, in balanced mode, parsed again by instanceSchema. */
-function tinyInstance(params: GeneratorInput, variant: Variant, pick?: (instance: Instance) => Instance): Instance {
-  let instance = generatePeriod({ positions: ["captain"], ...params }).instances[0]!;
-  if (pick) instance = pick(instance);
-  const rules = instance.ruleSet.rules.map((r) =>
-    r.id === "credit-window" ? { ...r, params: { minMinutes: variant.minCreditMinutes, maxMinutes: variant.maxCreditMinutes } } : r,
-  );
-  if (!rules.some((r) => r.id === "credit-window")) throw new Error("the preset has no credit window to fit");
-  return instanceSchema.parse({
-    ...instance,
-    ruleSet: { ...instance.ruleSet, rules },
-    settings: { ...instance.settings, mode: "balanced", ...(variant.reserve ? { reserve: variant.reserve } : {}) },
-  });
-}
 
 interface Case {
   name: string;
