@@ -6,7 +6,12 @@
  *     min ≤ Σ_i λ_i,reserve ≤ max          reserve row, when the settings bound it
  *     Σ_p c_p u_p ≤ U*                     coverage row (phase 2)
  *     Σ_ℓ σ_iℓ λ_iℓ + f_i ≥ φ              fairness row i (phase 2 with a floor; f_i ≥ 0 penalised)
- *     Σ_ℓ s_iℓ λ_iℓ ≥ S*_i − ε             score floor of crew i (strict seniority, once i's step is done)
+
+ * Strict seniority settles crew member i at a score S*_i by bounding every
+ * column of i scoring below S*_i − ε at 0 (`settle`): with one line each, that
+ * is the floor Σ_ℓ s_iℓ λ_iℓ ≥ S*_i − ε for integer solutions, and a tighter LP
+ * than the floor row (which lets a high and a low line mix), keeping the
+ * master a set-partitioning problem.
  *
  * Columns are appended as they are generated; rows keep their order, so the
  * duals of one solve price the next round. HiGHS reports, for a maximisation,
@@ -32,7 +37,8 @@ export interface MasterColumn {
 }
 
 export interface SolveOutcome {
-  status: "optimal" | "time-limit" | "interrupted" | "infeasible" | "other";
+  /** "target": a MIP stopped at an incumbent reaching its objective target (solveMip's `target`) */
+  status: "optimal" | "time-limit" | "interrupted" | "infeasible" | "target" | "other";
   objective: number;
   /** the MIP's dual bound (MIP solves) */
   bound?: number;
@@ -54,8 +60,8 @@ export class Master {
   coverageRow = -1;
   readonly fairRow: number[] = [];
   readonly fairCol: number[] = [];
-  /** strict seniority: the score-floor row of each crew member whose step is done */
-  readonly floorRow: number[] = [];
+  /** strict seniority: the least score of a usable line of each settled crew member (a reserve line scores 0) */
+  readonly minScore: number[] = [];
   /** master column indices of each crew member's columns */
   private readonly crewColumns: number[][];
   /** [lower, upper] of every row */
@@ -171,32 +177,58 @@ export class Master {
       indices.push(fair);
       values.push(fairness);
     }
-    const floor = this.floorRow[column.crew];
-    if (floor !== undefined && !column.reserve && column.score !== 0) {
-      indices.push(floor);
-      values.push(column.score);
-    }
-    this.colIndex.push(this.addRawCol(cost, 0, Infinity, indices, values));
+    this.colIndex.push(this.addRawCol(cost, 0, this.usable(column) ? Infinity : 0, indices, values));
     this.crewColumns[column.crew]!.push(this.columns.length);
     this.columns.push(column);
     return true;
   }
 
+  private usable(column: MasterColumn): boolean {
+    const min = this.minScore[column.crew];
+    return min === undefined || (column.reserve ? 0 : column.score) >= min;
+  }
+
   /**
-   * Strict seniority: crew member i keeps a score of at least `lower` from now
-   * on (Σ_ℓ s_iℓ λ_iℓ ≥ lower over i's columns, present and future; reserve scores 0).
+   * Strict seniority: from now on crew member i holds a line scoring at least
+   * `min` (a reserve line scores 0): every other column of theirs, present or
+   * future, is bounded at 0.
    */
-  addFloorRow(i: number, lower: number): void {
-    if (this.floorRow[i] !== undefined) throw new AppError("internal", `crew ${i} has a score floor already`);
-    const indices: number[] = [];
-    const values: number[] = [];
+  settle(i: number, min: number): void {
+    if (this.minScore[i] !== undefined) throw new AppError("internal", `crew ${i} is settled already`);
+    this.restrict(i, min);
+  }
+
+  /** Bounds crew member i's columns scoring below `min` at 0, until `release(i)` (a probe of strict seniority). */
+  restrict(i: number, min: number): void {
+    this.minScore[i] = min;
     for (const k of this.crewColumns[i]!) {
-      const column = this.columns[k]!;
-      if (column.reserve || column.score === 0) continue;
-      indices.push(this.colIndex[k]!);
-      values.push(column.score);
+      if (!this.usable(this.columns[k]!)) this.model.changeColBounds(this.colIndex[k]!, 0, 0);
     }
-    this.floorRow[i] = this.addRawRow(lower, Infinity, indices, values);
+  }
+
+  /** Undoes `restrict(i, …)` for a crew member who is not settled. */
+  release(i: number): void {
+    delete this.minScore[i];
+    for (const k of this.crewColumns[i]!) this.model.changeColBounds(this.colIndex[k]!, 0, Infinity);
+  }
+
+  /**
+   * Strict seniority's coverage probe and back: with `openCost` the objective
+   * is −Σ c_p u_p and the coverage row is lifted (every line's cost is the
+   * caller's to set); without, open time costs nothing and the coverage row
+   * holds Σ c_p u_p ≤ `limit` again.
+   */
+  probeCoverage(openCost: ReadonlyMap<number, number> | undefined, limit: number): void {
+    for (const [p, col] of this.openCol) {
+      const c = openCost ? -(openCost.get(p) ?? 0) : 0;
+      this.model.changeColCost(col, c);
+      this.openCost.set(p, c);
+    }
+    if (this.coverageRow >= 0) {
+      const upper = openCost ? Infinity : limit;
+      this.model.changeRowBounds(this.coverageRow, -Infinity, upper);
+      this.rowBounds[this.coverageRow] = [-Infinity, upper];
+    }
   }
 
   /** Sets the objective coefficient of each of crew member i's columns. */
@@ -250,12 +282,16 @@ export class Master {
     });
   }
 
-  private run(timeLimit: number, stop: () => boolean): SolveOutcome {
+  private run(timeLimit: number, stop: () => boolean, target?: number): SolveOutcome {
     // HiGHS measures time_limit on the model's own clock, which runs on across solves.
     this.model.zeroAllClocks();
     this.model.options.set({ time_limit: Math.max(0.01, timeLimit) });
-    const interrupt = (event: { interrupt(): void }) => {
-      if (stop()) event.interrupt();
+    let reached = false;
+    const interrupt = (event: { interrupt(): void; data: { mip_primal_bound?: number } }) => {
+      if (target !== undefined && (event.data.mip_primal_bound ?? -Infinity) >= target) {
+        reached = true;
+        event.interrupt();
+      } else if (stop()) event.interrupt();
       return undefined;
     };
     const result = this.model.run({ 1: interrupt, 2: interrupt, 6: interrupt });
@@ -264,7 +300,7 @@ export class Master {
     const status =
       result.modelStatus === codes.optimal ? "optimal"
       : result.modelStatus === codes.timeLimit ? "time-limit"
-      : result.modelStatus === codes.interrupted ? "interrupted"
+      : result.modelStatus === codes.interrupted ? (reached ? "target" : "interrupted")
       : result.modelStatus === codes.infeasible ? "infeasible"
       : "other";
     return { status, objective: this.model.getObjectiveValue() };
@@ -321,7 +357,7 @@ export class Master {
    */
   lagrangianBound(y: Float64Array, line: readonly number[]): number {
     let total = 0;
-    this.crewRow.forEach((_, i) => (total += this.crewTerm(y, line[i]!)));
+    this.crewRow.forEach((_, i) => (total += this.crewTerm(y, line[i]!, i)));
     const crewRows = new Set(this.crewRow);
     this.rowBounds.forEach(([lo, hi], r) => {
       if (crewRows.has(r)) return;
@@ -341,8 +377,12 @@ export class Master {
     return total;
   }
 
-  /** A crew member's term in `lagrangianBound`: their best line value at y, or their reserve line's if higher. */
-  crewTerm(y: Float64Array, line: number): number {
+  /**
+   * Crew member i's term in `lagrangianBound`: their best line value at y, or
+   * their reserve line's if higher and still usable (`settle`).
+   */
+  crewTerm(y: Float64Array, line: number, i: number): number {
+    if ((this.minScore[i] ?? 0) > 0) return line;
     return Math.max(line, this.reserveRow >= 0 ? -y[this.reserveRow]! : 0);
   }
 
@@ -376,7 +416,7 @@ export class Master {
   private savedSurplus: number[] | undefined;
 
   /** Solves with the line columns binary (price-and-branch on the columns so far). */
-  solveMip(timeLimit: number, stop: () => boolean, gapTolerance: number, start?: readonly MasterColumn[]): SolveOutcome {
+  solveMip(timeLimit: number, stop: () => boolean, gapTolerance: number, start?: readonly MasterColumn[], target?: number, infeasibleOk = false): SolveOutcome {
     this.surplusAllowed(false);
     this.model.changeColsIntegrality({ kind: "set", indices: this.colIndex }, this.colIndex.map(() => 1 as const));
     if (start) {
@@ -393,11 +433,12 @@ export class Master {
       this.model.setSolution({ colValue: x });
     }
     this.model.options.set({ mip_rel_gap: gapTolerance, mip_abs_gap: 1e-9, solver: "choose" });
-    const outcome = this.run(timeLimit, stop);
+    // With a target the solve stops at the first incumbent that reaches it.
+    const outcome = this.run(timeLimit, stop, target);
     const bound = Number(this.model.info.get("mip_dual_bound"));
     this.model.clearIntegrality();
     this.surplusAllowed(true);
-    if (outcome.status === "infeasible" || outcome.status === "other") {
+    if ((outcome.status === "infeasible" && !infeasibleOk) || outcome.status === "other") {
       throw new AppError("internal", `the master MIP could not be solved (${outcome.status})`);
     }
     return { ...outcome, bound };

@@ -53,6 +53,8 @@ export interface PriceRequest {
   allowed?: (pairing: number) => boolean;
   /** subgradient steps tuning the chain bound's multipliers (chain-bound.ts; default 4) */
   boundSteps?: number;
+  /** only lines scoring at least this (strict seniority's settled crew); value bounds are then over those lines */
+  minScore?: number;
 }
 
 export interface PricedLine {
@@ -283,6 +285,7 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   };
 
   const { scoreWeight, maxLines, nodeLimit } = request;
+  const minScore = request.minScore ?? -Infinity;
   const pairings = problem.pairings;
   const found: PricedLine[] = [];
   let floor = request.threshold;
@@ -333,19 +336,21 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   /** Visits the current path as a line, then its extensions; returns the depth to unwind to (dead prefix) or Infinity. */
   const visit = (from: number, chainAfter: number): number => {
     nodes++;
-    const bounds = scoreWeight > 0 ? wishBounds(problem, c, path, dayCount, credit, from) : undefined;
-    const optimistic = bounds?.ahead ?? 0;
+    const bounds = scoreWeight > 0 || minScore > -Infinity ? wishBounds(problem, c, path, dayCount, credit, from) : undefined;
+    // No extension of the path can reach the least score asked for.
+    if (bounds && bounds.ahead < minScore) return Infinity;
+    const optimistic = scoreWeight > 0 ? bounds!.ahead : 0;
     // The chain bound's base at this node: what the line so far is worth to it.
     const base = pooled ? Infinity : gainSum + scoreWeight * nowScore(problem, c, path, dayCount, credit, chain.theta) - chain.kappa * credit - chain.mu * worked + chain.constant;
     const lastDay = path.length ? chain.lastDay[path.at(-1)!]! : -10;
     const chained = path.length ? base + chain.suffix[path.at(-1)!]! : chain.root;
     if (Math.min(chained, gainSum + ahead(chainAfter, from, credit, worked) + scoreWeight * optimistic) <= floor) return Infinity;
     // The path itself as a line (below the credit minimum it cannot be legal).
-    const here = bounds?.here ?? 0;
-    if (credit >= problem.minCreditMinutes && gainSum + scoreWeight * here > floor) {
+    const here = scoreWeight > 0 ? bounds!.here : 0;
+    if (credit >= problem.minCreditMinutes && gainSum + scoreWeight * here > floor && (bounds?.here ?? 0) >= minScore) {
       const score = scoreLine(problem, c, path.map((j) => eligible[j]!));
       const value = scoreWeight * score + gainSum;
-      if (value > floor) {
+      if (value > floor && score >= minScore) {
         const state = engineState();
         if (typeof state === "number") return state;
         if (finish(state).legal) admit({ pairings: path.map((j) => eligible[j]!), score, value });

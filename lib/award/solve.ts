@@ -97,20 +97,26 @@ export interface AwardReport {
  * - "no-legal-line": no line-holder line is legal for them (score 0);
  * - "best-alone": `bound` is their best line with every pairing free
  *   (an exhausted search), and `score` reaches it;
- * - "lp": `bound` is the step's master LP optimum over every line of everyone
- *   (column generation ran until pricing found nothing);
- * - "lagrangian": `bound` is a Lagrangian bound of the step (valid at any
- *   duals; Master.lagrangianBound);
- * - "enumeration": the integer solve was repeated over every line that
- *   could be part of a better award (gap closing), so `score` is optimal;
- * - "unproven": a limit stopped the step; `bound` is the best bound known.
+ * - "reserve-minimum": with only their lines scoring above `score`, too few
+ *   crew could hold reserve for the group's minimum (the LP is infeasible);
+ * - "coverage": with only their lines scoring above `score`, the master LP
+ *   over every line of everyone (column generation; a Lagrangian bound, valid
+ *   at any duals) leaves at least `openAbove` open, more than the coverage
+ *   kept — so no award gives them more (`bound` = `score`);
+ * - "enumeration": the same, proven by the integer solve over every line that
+ *   could keep the coverage (gap closing) where the LP alone could not;
+ * - "unproven": a limit stopped the step; `bound` is their best line alone
+ *   (null when that search was not exhaustive).
  * `step` is the crew member's place in the sequence (1 = most senior).
  */
 export interface StrictCertificate {
   step: number;
-  method: "no-legal-line" | "best-alone" | "lp" | "lagrangian" | "enumeration" | "unproven";
+  method: "no-legal-line" | "best-alone" | "reserve-minimum" | "coverage" | "enumeration" | "unproven";
   score: number;
-  bound: number;
+  /** null: unknown (the best line alone was not proven) */
+  bound: number | null;
+  /** "coverage" and "enumeration": the least open time (credit minutes and a share per position) of any award giving them more */
+  openAbove?: number;
 }
 
 const countSteps = (certificates: readonly StrictCertificate[]) => {
@@ -146,6 +152,8 @@ const FAIRNESS_PENALTY = 100;
 const FLOOR_MARGIN = 1e-6;
 /** a strict step may use up to this many times its even share of the time left */
 const STEP_SHARE = 3;
+/** open time (in credit minutes) a strict probe's bound must exceed U* by to prove anything: far below one minute */
+const COVERAGE_TOL = 1e-3;
 /** a strict step's score reaches a bound within this (the floors' margin with room for HiGHS's tolerances) */
 const SCORE_TOL = 2 * FLOOR_MARGIN;
 
@@ -249,13 +257,13 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       col.reserve ? 0 : best[col.crew]! <= 0 ? 1 : Math.min(1, col.score / best[col.crew]!);
     const wishCoefficient = (col: Pick<MasterColumn, "crew" | "score" | "reserve">) =>
       col.reserve || best[col.crew]! <= 0 ? 0 : problem.crew[col.crew]!.weight * fairnessCoefficient(col);
-    let phase: "coverage" | "wishes" | "strict" = "coverage";
+    let phase: "coverage" | "wishes" | "strict" | "probe" = "coverage";
     // Strict seniority: the crew member whose score the current step maximises, and the scores S*_i settled so far.
     let stepCrew = -1;
     const settled: number[] = [];
     const strictCost = (col: Pick<MasterColumn, "crew" | "score" | "reserve">) => (col.crew === stepCrew && !col.reserve ? col.score : 0);
     const costOf = (col: MasterColumn) =>
-      phase === "coverage" ? tieBreak * wishCoefficient(col) : phase === "wishes" ? wishCoefficient(col) : strictCost(col);
+      phase === "coverage" ? tieBreak * wishCoefficient(col) : phase === "wishes" ? wishCoefficient(col) : phase === "strict" ? strictCost(col) : 0;
     const addColumn = (col: MasterColumn) => master.add(col, costOf(col), phase === "wishes" ? fairnessCoefficient(col) : 0);
 
     problem.crew.forEach((_, i) => addColumn({ crew: i, pairings: [], reserve: true, score: 0 }));
@@ -327,7 +335,9 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         exhausted,
       });
       for (let round = 0; ; round++) {
-        const lp = clock.phase(`${phase}-lp`, () => master.solveLp(clock.remainingSeconds(share), stop));
+        const lp = clock.phase(`${phase}-lp`, () => master.solveLp(clock.remainingSeconds(share), stop, phase === "probe"));
+        // A strict probe's LP is infeasible only by the reserve row (open time makes every other row feasible): nothing to bound.
+        if (lp.status === "infeasible") return { lp, bound: -Infinity, exhausted: true };
         if (lp.status !== "optimal") {
           noteStop();
           return result(lp, false);
@@ -337,6 +347,8 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         // open time is 0 and cannot fall further: the integer solve takes over (an award that then
         // leaves nothing open is proven optimal for coverage without more pricing).
         if (phase === "coverage" && lp.objective >= -0.5 / (1 + totalPositions)) return result(lp, false);
+        // A strict probe whose LP keeps the coverage cannot prove anything by more pricing: the integer solve decides.
+        if (phase === "probe" && lp.objective >= -coverageLimit) return result(lp, false);
         const centre = bounded?.y;
         const at: Float64Array = mode === "smooth" && centre ? centre.map((v, r) => SMOOTHING * v + (1 - SMOOTHING) * y[r]!) : y;
         const cost = pairingCosts(at);
@@ -354,7 +366,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
             }
             const yi = y[master.crewRow[i]!]!;
             const offset = lineOffset(i, at);
-            const request = { scoreWeight: scoreWeight(i, at), cost, threshold: at[master.crewRow[i]!]! + TOL - offset, maxLines: linesPerRound, nodeLimit: quickNodes };
+            const request = { scoreWeight: scoreWeight(i, at), cost, threshold: at[master.crewRow[i]!]! + TOL - offset, maxLines: linesPerRound, nodeLimit: quickNodes, ...settledScore(i) };
             let r = priceLines(problem, c, request);
             if ((mode === "deep" || mode === "deeper") && r.lines.length === 0 && !r.exhausted) {
               r = priceLines(problem, c, { ...request, nodeLimit: mode === "deep" ? nodeLimit : nodeLimit * DEEPER });
@@ -403,6 +415,8 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       }
     };
 
+    /** Pricing's least score for a settled crew member (strict seniority: Master.settle). */
+    const settledScore = (i: number): { minScore?: number } => (master.minScore[i] === undefined ? {} : { minScore: master.minScore[i] });
     const pairingCosts = (y: Float64Array) => {
       const cost = new Float64Array(problem.pairings.length);
       for (const [p, row] of master.coverRow) cost[p] = y[row]!;
@@ -419,11 +433,9 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     const scoreWeight = (i: number, y: Float64Array) => {
       if (best[i]! <= 0) return 0;
       if (phase === "coverage") return (tieBreak * problem.crew[i]!.weight) / best[i]!;
-      if (phase === "strict") {
-        // c_ℓ = s_ℓ for the step's crew member, 0 for everyone else; a settled senior's floor row adds −y_floor·s_ℓ.
-        const floorRow = master.floorRow[i];
-        return (i === stepCrew ? 1 : 0) - (floorRow === undefined ? 0 : y[floorRow]!);
-      }
+      // Strict: c_ℓ = s_ℓ for the step's crew member, 0 for everyone else; a probe prices open time only.
+      if (phase === "strict") return i === stepCrew ? 1 : 0;
+      if (phase === "probe") return 0;
       const fair = master.fairRow[i];
       const yf = fair === undefined ? 0 : y[fair]!;
       return (problem.crew[i]!.weight - yf) / best[i]!;
@@ -435,10 +447,14 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
      * member's term in L(y); when every such line is enumerated and the
      * integer solve repeated, the result is optimal. Returns the chosen columns.
      */
-    const integer = (bound: number, bounded: Bounded | undefined, exhausted: boolean, start: readonly MasterColumn[] | undefined) => {
-      let mip = clock.phase(`${phase}-mip`, () => master.solveMip(clock.remainingSeconds(share), stop, 1e-9, start));
+    const integer = (bound: number, bounded: Bounded | undefined, exhausted: boolean, start: readonly MasterColumn[] | undefined, target?: { value: number; share: number }) => {
+      // With a target (strict seniority) the solve stops at the first award reaching it, within its own share of the time.
+      const limit = clock.remainingSeconds(share) * (target?.share ?? 1);
+      // (A strict probe's integer problem may have no solution on the lines so far: the reserve minimum.)
+      let mip = clock.phase(`${phase}-mip`, () => master.solveMip(limit, stop, 1e-9, start, target?.value, phase === "probe"));
       let proven = false;
-      if (mip.status !== "optimal") noteStop();
+      if (mip.status === "infeasible") return { mip, proven: false, chosen: [...(start ?? greedyColumns)] };
+      if (mip.status !== "optimal" && mip.status !== "target") noteStop();
       if (mip.status === "optimal" && bound - mip.objective <= 1e-7 * Math.max(1, Math.abs(bound))) proven = true;
       else if (exhausted && bounded && mip.status === "optimal") {
         const gapAbs = bounded.value - mip.objective;
@@ -453,8 +469,8 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
               break;
             }
             const cap = options.closingLines ?? 400;
-            const term = master.crewTerm(y, line[i]!);
-            const r = priceLines(problem, c, { scoreWeight: scoreWeight(i, y), cost, threshold: term - gapAbs - TOL - lineOffset(i, y), maxLines: cap, nodeLimit: nodeLimit * 5 });
+            const term = master.crewTerm(y, line[i]!, i);
+            const r = priceLines(problem, c, { scoreWeight: scoreWeight(i, y), cost, threshold: term - gapAbs - TOL - lineOffset(i, y), maxLines: cap, nodeLimit: nodeLimit * 5, ...settledScore(i) });
             if (!r.exhausted || r.lines.length >= cap) complete = false;
             for (const l of r.lines) if (addColumn({ crew: i, pairings: l.pairings, reserve: false, score: l.score })) added++;
           }
@@ -469,7 +485,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       if (mip.status === "optimal" && valid) return { mip, proven, chosen };
       // Stopped early: keep the better of what the solve holds and the solution it started from.
       if (valid && value(chosen) >= value(fallback) - 1e-9) return { mip, proven: false, chosen };
-      warnings.push(`the ${phase} integer solve stopped without improving on its starting solution`);
+      if (phase !== "probe") warnings.push(`the ${phase} integer solve stopped without improving on its starting solution`);
       return { mip, proven: false, chosen: fallback };
     };
     /** Positions each pairing still needs under a full solution (negative: over-covered). */
@@ -486,7 +502,8 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       if ([...openAfter(cols).values()].some((open) => open < 0)) return false;
       const reserves = cols.filter((col) => col.reserve).length;
       if (cols.some((col) => settled[col.crew] !== undefined && (col.reserve ? 0 : col.score) < settled[col.crew]! - FLOOR_MARGIN - 1e-9)) return false;
-      return reserves >= reserveMin && reserves <= reserveMax && coverageOf(cols) <= coverageLimit;
+      // (A strict probe asks whether the coverage can be kept: its solutions are weighed by value, not refused here.)
+      return reserves >= reserveMin && reserves <= reserveMax && (phase === "probe" || coverageOf(cols) <= coverageLimit);
     };
     /** The phase's objective of a full solution (larger is better). */
     const value = (cols: readonly MasterColumn[]) =>
@@ -494,7 +511,9 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         ? -coverageOf(cols) + tieBreak * cols.reduce((t, col) => t + wishCoefficient(col), 0)
         : phase === "wishes"
           ? cols.reduce((t, col) => t + wishCoefficient(col), 0)
-          : cols.reduce((t, col) => t + strictCost(col), 0);
+          : phase === "strict"
+            ? cols.reduce((t, col) => t + strictCost(col), 0)
+            : -coverageOf(cols);
     const chosenColumns = () => {
       const x = master.values();
       return master.columns.filter((_, k) => x[k]! > 0.5);
@@ -565,7 +584,9 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
      *    line that could be part of a better award is enumerated).
      *
      * Every step starts from the previous step's award, which meets all the
-     * floors, and the master keeps its lines and basis from step to step.
+     * floors, and the master keeps its lines and basis from step to step. A
+     * settled crew member keeps only their lines of score S*_i − FLOOR_MARGIN
+     * or more (Master.settle), and pricing looks only for such lines.
      */
     const strictSteps = () => {
       phase = "strict";
@@ -573,6 +594,91 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       let incumbent = [...cover1.chosen].sort((x, y) => x.crew - y.crew);
       const certificates: StrictCertificate[] = [];
       const scoreOf = (col: MasterColumn) => (col.reserve ? 0 : col.score);
+      /**
+       * Can crew member k score `target` or more with the seniors' scores and
+       * the coverage kept? k keeps only such lines (Master.restrict) and the
+       * master minimises open time instead (Master.probeCoverage): when even
+       * the relaxation — or the integer solve over every line that could do
+       * better (gap closing) — must leave more open than U*, no award gives k
+       * `target`; when the integer solve keeps the coverage, it is a better award.
+       */
+      /**
+       * A start for a probe's integer solve: the award so far with k on the
+       * line the probe's LP uses most, and every unsettled crew member whose
+       * line shares a trip with it on reserve (while the reserve maximum
+       * allows; else on their best pool line that fits) — open time it then
+       * reduces. Undefined when a settled crew member's line is in the way.
+       */
+      const probeStart = (k: number, award: readonly MasterColumn[]): MasterColumn[] | undefined => {
+        const x = master.values();
+        let pick: MasterColumn | undefined;
+        let most = 0;
+        master.columns.forEach((col, c) => {
+          if (col.crew === k && !col.reserve && x[c]! > most && col.score >= (master.minScore[k] ?? -Infinity)) {
+            most = x[c]!;
+            pick = col;
+          }
+        });
+        if (!pick) return undefined;
+        const taken = new Set(pick.pairings);
+        let reserves = award.filter((col) => col.reserve && col.crew !== k).length;
+        const out: MasterColumn[] = [];
+        for (const col of award) {
+          if (col.crew === k) {
+            out.push(pick);
+            continue;
+          }
+          if (!col.pairings.some((p) => taken.has(p))) {
+            out.push(col);
+            continue;
+          }
+          if (settled[col.crew] !== undefined) return undefined;
+          if (reserves < reserveMax) {
+            const reserve = master.columns.find((c) => c.crew === col.crew && c.reserve);
+            if (!reserve) return undefined;
+            out.push(reserve);
+            reserves++;
+            continue;
+          }
+          return undefined;
+        }
+        return reserves >= reserveMin ? out : undefined;
+      };
+      let incumbentNow: MasterColumn[] = [];
+      const probeAbove = (
+        k: number,
+        target: number,
+        from: number,
+      ): { kind: "impossible"; method: "best-alone" | "reserve-minimum" | "coverage" | "enumeration"; openAbove: number } | { kind: "better"; chosen: MasterColumn[] } | { kind: "undecided" } => {
+        // The master needs a line of k's that scores `target` to start from: k's best such lines alone.
+        const seeds = priceLines(problem, problem.crew[k]!, { scoreWeight: 1, cost: new Float64Array(problem.pairings.length), threshold: -Infinity, maxLines: linesPerRound, nodeLimit, minScore: target });
+        if (seeds.lines.length === 0) return seeds.exhausted ? { kind: "impossible", method: "best-alone", openAbove: Infinity } : { kind: "undecided" };
+        phase = "probe";
+        for (const l of seeds.lines) addColumn({ crew: k, pairings: l.pairings, reserve: false, score: l.score });
+        master.restrict(k, target);
+        master.setCrewCosts(k, () => 0);
+        master.probeCoverage(openCost, coverageLimit);
+        try {
+          const step = generate(from, from + 50 / n);
+          if (step.lp.status === "infeasible") return { kind: "impossible", method: "reserve-minimum", openAbove: Infinity };
+          // −bound is a lower bound on open time (in openCost's units) for every award giving k `target`.
+          if (-step.bound > coverageLimit + COVERAGE_TOL) return { kind: "impossible", method: "coverage", openAbove: -step.bound };
+          if (stop()) return { kind: "undecided" };
+          const solved = integer(step.bound, step.bounded, step.exhausted, probeStart(k, incumbentNow), { value: -coverageLimit, share: 0.5 });
+          const keeps = solved.mip.status !== "infeasible" && solved.mip.status !== "other";
+          const byCrew = solved.chosen.find((col) => col.crew === k);
+          if (keeps && feasible(solved.chosen) && coverageOf(solved.chosen) <= coverageLimit && byCrew && !byCrew.reserve && byCrew.score >= target) {
+            return { kind: "better", chosen: solved.chosen };
+          }
+          if (solved.proven && -solved.mip.objective > coverageLimit + COVERAGE_TOL) return { kind: "impossible", method: "enumeration", openAbove: -solved.mip.objective };
+          return { kind: "undecided" };
+        } finally {
+          master.probeCoverage(undefined, coverageLimit);
+          master.release(k);
+          phase = "strict";
+          master.setCrewCosts(k, strictCost);
+        }
+      };
       for (let k = 0; k < n; k++) {
         if (cancelled()) break;
         stepCrew = k;
@@ -587,32 +693,35 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         } else if (alone.exhausted[k] && had >= best[k]! - SCORE_TOL) {
           certificate = { step: k + 1, method: "best-alone", score: had, bound: best[k]! };
         } else {
-          const first = integer(Infinity, undefined, false, incumbent);
+          const first = integer(Infinity, undefined, false, incumbent, { value: alone.exhausted[k] ? best[k]! - SCORE_TOL : Infinity, share: 0.4 });
           let chosen = first.chosen;
           let z = value(chosen);
-          if (alone.exhausted[k] && z >= best[k]! - SCORE_TOL) {
-            certificate = { step: k + 1, method: "best-alone", score: z, bound: best[k]! };
-          } else {
-            const step = generate(from, from + 50 / n);
-            if (z >= step.bound - SCORE_TOL) {
-              certificate = { step: k + 1, method: step.exhausted ? "lp" : "lagrangian", score: z, bound: step.bound };
-            } else {
-              const closed = integer(step.bound, step.bounded, step.exhausted, chosen);
-              if (value(closed.chosen) >= z) chosen = closed.chosen;
-              z = value(chosen);
-              certificate = closed.proven
-                ? { step: k + 1, method: "enumeration", score: z, bound: z }
-                : { step: k + 1, method: "unproven", score: z, bound: Math.max(z, step.bound) };
+          let found: StrictCertificate | undefined;
+          // Probe above z until a probe proves nothing better exists, finds nothing, or time runs out.
+          while (!found) {
+            if (alone.exhausted[k] && z >= best[k]! - SCORE_TOL) {
+              found = { step: k + 1, method: "best-alone", score: z, bound: best[k]! };
+              break;
             }
+            if (stop()) break;
+            incumbentNow = chosen;
+            const probe = probeAbove(k, z + SCORE_TOL, from);
+            // (No line of k's scores `target` at all: z is their best line alone.)
+            if (probe.kind === "impossible") found = { step: k + 1, method: probe.method, score: z, bound: z, ...(Number.isFinite(probe.openAbove) ? { openAbove: probe.openAbove } : {}) };
+            else if (probe.kind === "better") {
+              chosen = probe.chosen;
+              z = value(chosen);
+            } else break;
           }
+          certificate = found ?? { step: k + 1, method: "unproven", score: z, bound: alone.exhausted[k] ? Math.max(z, best[k]!) : null };
           incumbent = [...chosen].sort((x, y) => x.crew - y.crew);
         }
         certificates.push(certificate);
         stepCrew = -1;
         master.setCrewCosts(k, strictCost);
-        const settledScore = scoreOf(incumbent[k]!);
-        settled[k] = settledScore;
-        if (settledScore > 0) master.addFloorRow(k, settledScore - FLOOR_MARGIN);
+        const score = scoreOf(incumbent[k]!);
+        settled[k] = score;
+        if (score > 0) master.settle(k, score - FLOOR_MARGIN);
       }
       share = 1;
       if (certificates.length < n) noteStop();
@@ -682,7 +791,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     const strictBound = strictResult
       ? problem.crew.reduce((t, c, i) => {
           const cert = strictResult.certificates[i];
-          return t + c.weight * (best[i]! <= 0 || !cert ? 1 : Math.min(1, cert.bound / best[i]!));
+          return t + c.weight * (best[i]! <= 0 || !cert || cert.bound === null ? 1 : Math.min(1, cert.bound / best[i]!));
         }, 0)
       : 0;
     const lpBound = strictResult ? Math.max(objective, strictBound) : Math.max(objective, Math.min(allSatisfied, balanced!.wishes.bound + constant));

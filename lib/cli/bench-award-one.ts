@@ -2,7 +2,11 @@
  * One benchmark run in a process of its own (so that peak memory is this
  * method's alone): `tsx lib/cli/bench-award-one.ts <instance> <method> <seconds>`
  * prints one JSON line of figures. Instances: "S", "M", "L" (generated, seed 1,
- * captains) and "pub1:BAB"-style (the published data set's instance and base).
+ * captains) and "pub1:BAB"-style (the published data set's instance and base);
+ * a suffix "@0.8" keeps that share of the crew (every crew member whose place in
+ * seniority order falls in the kept share, spread evenly: see fewerCrew), so
+ * that coverage binds. Methods: "column-generation" (balanced), "strict"
+ * (column generation in strict seniority), "greedy", "compact-mip".
  */
 import type { Instance } from "../domain/index.ts";
 import { instanceSchema } from "../domain/index.ts";
@@ -17,7 +21,18 @@ export const GENERATED = {
   L: { crew: 300, pairings: 1650 },
 } as const;
 
+/** The instance with `share` of its crew, kept evenly through the seniority list (the k-th of n kept when ⌊k·share⌋ grows). */
+export function fewerCrew(instance: Instance, share: number): Instance {
+  const sorted = [...instance.crew].sort((a, b) => a.seniority - b.seniority);
+  const kept = sorted.filter((_, k) => Math.floor((k + 1) * share) > Math.floor(k * share));
+  const ids = new Set(kept.map((c) => c.id));
+  const bids = Object.fromEntries(Object.entries(instance.bids).filter(([id]) => ids.has(id)));
+  return { ...instance, crew: kept, bids };
+}
+
 export function benchInstance(name: string): Instance {
+  const scaled = /^(.*)@([0-9.]+)$/.exec(name);
+  if (scaled) return fewerCrew(benchInstance(scaled[1]!), Number(scaled[2]));
   const size = GENERATED[name as keyof typeof GENERATED];
   if (size) return generatePeriod({ ...size, days: 31, seed: 1, positions: ["captain"] }).instances[0]!;
   const match = /^pub([12]):([A-Z]{3})$/.exec(name);
@@ -32,10 +47,11 @@ async function main(): Promise<void> {
   const [name, method, seconds] = process.argv.slice(2);
   if (!name || !method || !seconds) throw new Error("usage: bench-award-one <instance> <method> <seconds>");
   const base = benchInstance(name);
-  const instance = instanceSchema.parse({ ...base, settings: { ...base.settings, mode: "balanced", timeLimitSeconds: Number(seconds) } });
+  const mode = method === "strict" ? "strict" : "balanced";
+  const instance = instanceSchema.parse({ ...base, settings: { ...base.settings, mode, timeLimitSeconds: Number(seconds) } });
   const t0 = performance.now();
   let result: AwardResult;
-  if (method === "column-generation") result = await solveAward(instance);
+  if (method === "column-generation" || method === "strict") result = await solveAward(instance);
   else if (method === "greedy") result = greedyAward(instance);
   else if (method === "compact-mip") {
     const { compactMipAward } = await import("../award/compact-mip.ts");
@@ -68,6 +84,7 @@ async function main(): Promise<void> {
       // "optimal" only when proven; a search that ended by itself short of a proof says so.
       stoppedBy: report.provenOptimal ? "optimal" : stats.stoppedBy === "optimal" ? "search ended" : (stats.stoppedBy ?? null),
       neighbourhoods: report.neighbourhoods ?? null,
+      strictSteps: report.strictSteps ?? null,
       times: stats.times,
       peakMB: process.resourceUsage().maxRSS / 1024,
     }),
