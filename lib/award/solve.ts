@@ -31,6 +31,7 @@ import { prepareProblem, scoreLine, type AwardProblem } from "./problem.ts";
 import { BEST_LINE_NODES, bestScores, priceLines } from "./pricing.ts";
 import { improveByNeighbourhoods } from "./improve.ts";
 import { compactMipAward } from "./compact-mip.ts";
+import { checkLine } from "../rules/index.ts";
 
 export type AwardPhase = "prepare" | "coverage" | "wishes" | "integer" | "done";
 
@@ -644,6 +645,47 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         }
         return reserves >= reserveMin ? out : undefined;
       };
+      /**
+       * Crew member i's version of a line (a reserve line, or these pairings) when lib/rules
+       * calls it legal for i as a whole line, scored by lineScore; undefined otherwise.
+       */
+      const lineFor = (i: number, col: MasterColumn): MasterColumn | undefined => {
+        const c = problem.crew[i]!;
+        if (col.reserve) {
+          return checkLine(c.crew, instance.ruleSet, [], problem.engine, { reserve: true }).legal ? { crew: i, pairings: [], reserve: true, score: 0 } : undefined;
+        }
+        if (col.pairings.some((p) => c.position[p]! < 0)) return undefined;
+        const items = col.pairings.map((p) => ({ kind: "pairing" as const, pairing: problem.pairings[p]! }));
+        if (!checkLine(c.crew, instance.ruleSet, items, problem.engine).legal) return undefined;
+        return { crew: i, pairings: col.pairings, reserve: false, score: scoreLine(problem, c, col.pairings) };
+      };
+      /**
+       * Swaps that raise crew member i's score: i takes a more junior colleague's line
+       * that is legal for i, the colleague takes i's (legal for them) — the coverage and
+       * everyone else's lines unchanged, so the award gets lexicographically better.
+       * Repeats with the best swap until none is left; returns the number made.
+       */
+      const swapUp = (i: number, award: MasterColumn[]): number => {
+        let made = 0;
+        for (;;) {
+          const mine = scoreOf(award[i]!);
+          let bestSwap: [MasterColumn, MasterColumn, number] | undefined;
+          for (let j = i + 1; j < n; j++) {
+            if (Master.key({ ...award[j]!, crew: i }) === Master.key(award[i]!)) continue;
+            const taken = lineFor(i, award[j]!);
+            if (!taken || taken.reserve || taken.score <= mine + SCORE_TOL || (bestSwap && taken.score <= bestSwap[0].score)) continue;
+            const given = lineFor(j, award[i]!);
+            if (given) bestSwap = [taken, given, j];
+          }
+          if (!bestSwap) return made;
+          const [taken, given, j] = bestSwap;
+          award[i] = taken;
+          award[j] = given;
+          addColumn(taken);
+          addColumn(given);
+          made++;
+        }
+      };
       let incumbentNow: MasterColumn[] = [];
       const probeAbove = (
         k: number,
@@ -694,7 +736,8 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
           certificate = { step: k + 1, method: "best-alone", score: had, bound: best[k]! };
         } else {
           const first = integer(Infinity, undefined, false, incumbent, { value: alone.exhausted[k] ? best[k]! - SCORE_TOL : Infinity, share: 0.4 });
-          let chosen = first.chosen;
+          let chosen = [...first.chosen].sort((x, y) => x.crew - y.crew);
+          swapUp(k, chosen);
           let z = value(chosen);
           let found: StrictCertificate | undefined;
           // Probe above z until a probe proves nothing better exists, finds nothing, or time runs out.
@@ -709,7 +752,8 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
             // (No line of k's scores `target` at all: z is their best line alone.)
             if (probe.kind === "impossible") found = { step: k + 1, method: probe.method, score: z, bound: z, ...(Number.isFinite(probe.openAbove) ? { openAbove: probe.openAbove } : {}) };
             else if (probe.kind === "better") {
-              chosen = probe.chosen;
+              chosen = [...probe.chosen].sort((x, y) => x.crew - y.crew);
+              swapUp(k, chosen);
               z = value(chosen);
             } else break;
           }
@@ -725,6 +769,25 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       }
       share = 1;
       if (certificates.length < n) noteStop();
+      // A last pass of swaps in seniority order: only an unproven step can gain by one (a proven
+      // one has no better award), and a colleague whose line changes keeps their old bound, which
+      // still holds (their seniors' scores only rose), but is unproven now.
+      // (Passes repeat until one makes no swap: each swap raises the award lexicographically, so they end.)
+      stepCrew = -1;
+      for (let swapped = true; swapped; ) {
+        swapped = false;
+        for (let i = 0; i < certificates.length; i++) {
+          const before = incumbent.map(scoreOf);
+          if (swapUp(i, incumbent) === 0) continue;
+          swapped = true;
+          incumbent.forEach((col, j) => {
+            const cert = certificates[j];
+            if (!cert || Math.abs(scoreOf(col) - before[j]!) <= 1e-12) return;
+            const bound = cert.method === "unproven" ? cert.bound : Math.max(cert.bound ?? -Infinity, scoreOf(col));
+            certificates[j] = { ...cert, method: "unproven", score: scoreOf(col), bound };
+          });
+        }
+      }
       return { chosen: incumbent, certificates };
     };
 

@@ -4,8 +4,14 @@
  * method on every instance at the same time limit, one after the other, each in
  * its own process (peak memory is per method), side by side in one run on one
  * machine. Prints the table and writes it to docs/benchmarks.md.
+ * Methods: column-generation (weighted balance), strict (strict seniority),
+ * greedy, compact-mip; instances may carry "@0.8" (that share of the crew).
+ * `--rows FILE` renders rows already measured by bench-award-one (one JSON line
+ * each) instead of running them, with `--note` saying how they were run.
  * Targets (issue 5): L weighted ≤ 3 minutes with gap ≤ 0.5 % and ≤ 2 GB;
- * coverage 100 % wherever the LP shows it possible.
+ * coverage 100 % wherever the LP shows it possible. Issue 6: L strict ≤ 10
+ * minutes and ≤ 2 GB with the audits clean; open time at 0.8 crew beside the
+ * greedy award's.
  */
 import { execFileSync } from "node:child_process";
 import fs from "node:fs";
@@ -18,6 +24,8 @@ const { values } = parseArgs({
     methods: { type: "string", default: "column-generation,greedy,compact-mip" },
     "time-limit": { type: "string", default: "180" },
     out: { type: "string", default: "docs/benchmarks.md" },
+    rows: { type: "string" },
+    note: { type: "string" },
   },
 });
 const instances = values.instances.split(",");
@@ -42,11 +50,14 @@ interface Row {
   rounds?: number;
   stoppedBy?: string | null;
   peakMB?: number;
+  strictSteps?: Record<string, number> | null;
   error?: string;
 }
 
-const rows: Row[] = [];
-for (const instance of instances) {
+const rows: Row[] = values.rows
+  ? fs.readFileSync(values.rows, "utf8").split("\n").filter((l) => l.trim()).map((l) => JSON.parse(l) as Row)
+  : [];
+for (const instance of values.rows ? [] : instances) {
   for (const method of methods) {
     process.stderr.write(`${instance} ${method} … `);
     try {
@@ -70,14 +81,16 @@ for (const instance of instances) {
   }
 }
 
+const steps = (s: Record<string, number> | null | undefined) =>
+  s ? Object.entries(s).sort((a, b) => b[1] - a[1]).map(([method, count]) => `${method} ${count}`).join(", ") : "—";
 const f = (x: number | undefined | null, digits = 3) => (x === undefined || x === null ? "—" : x.toFixed(digits));
 const table = [
-  "| instance | crew × pairings | method | time (s) | open positions | open time (h) | LP bound on open time (h) | mean sat. | min sat. | Jain | gap to LP bound | lines | rounds | stopped by | peak memory (MB) |",
-  "| --- | --- | --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | --- | ---: |",
+  "| instance | crew × pairings | method | time (s) | open positions | open time (h) | LP bound on open time (h) | mean sat. | min sat. | Jain | gap to LP bound | strict steps | lines | rounds | stopped by | peak memory (MB) |",
+  "| --- | --- | --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | --- | ---: | ---: | --- | ---: |",
   ...rows.map((r) =>
     r.error
-      ? `| ${r.instance} | | ${r.method} | | | | | | | | | | | ${r.error} | |`
-      : `| ${r.instance} | ${r.crew} × ${r.pairings} | ${r.method} | ${f(r.seconds, 1)} | ${r.openPositions} of ${r.positions} | ${f(r.openCreditMinutes! / 60, 1)} | ${r.method === "column-generation" ? f(r.coverageLpBound! / 60, 1) : "—"} | ${f(r.mean)} | ${f(r.min)} | ${f(r.jain)} | ${r.gap === null || r.gap === undefined ? "—" : `${(r.gap * 100).toFixed(2)} %`} | ${r.columns ?? "—"} | ${r.rounds ?? "—"} | ${r.stoppedBy ?? "—"} | ${f(r.peakMB, 0)} |`,
+      ? `| ${r.instance} | | ${r.method} | | | | | | | | | | | | ${r.error} | |`
+      : `| ${r.instance} | ${r.crew} × ${r.pairings} | ${r.method} | ${f(r.seconds, 1)} | ${r.openPositions} of ${r.positions} | ${f(r.openCreditMinutes! / 60, 1)} | ${r.method === "column-generation" || r.method === "strict" ? f(r.coverageLpBound! / 60, 1) : "—"} | ${f(r.mean)} | ${f(r.min)} | ${f(r.jain)} | ${r.method !== "strict" && r.gap !== null && r.gap !== undefined ? `${(r.gap * 100).toFixed(2)} %` : "—"} | ${steps(r.strictSteps)} | ${r.columns ?? "—"} | ${r.rounds ?? "—"} | ${r.stoppedBy ?? "—"} | ${f(r.peakMB, 0)} |`,
   ),
 ].join("\n");
 
@@ -85,9 +98,10 @@ const doc = `# Award benchmark
 
 Written by \`npm run bench:award\` (lib/cli/bench-award.ts); do not edit by hand.
 
-- Run: ${new Date().toISOString().slice(0, 16).replace("T", " ")} UTC on ${os.cpus().length} × ${os.cpus()[0]?.model ?? "unknown CPU"}, Node ${process.version}; every run one after the other in its own process, at a time limit of ${seconds} s.
+- Run: ${values.note ?? `${new Date().toISOString().slice(0, 16).replace("T", " ")} UTC on ${os.cpus().length} × ${os.cpus()[0]?.model ?? "unknown CPU"}, Node ${process.version}; every run one after the other in its own process, at a time limit of ${seconds} s.`}
 - Instances: S (30 crew, 120 pairings), M (150, 600) and L (300, 1,650), generated for 31 days with seed 1 (the fictional Larkfield Air, captains at Halvern); pubN:BASE is the published instance N (Kasirzadeh, Saddoune & Soumis 2017) at one crew base, under the data set's own rule set.
-- Mode: weighted balance (β = 1, rank decay 0.8, no fairness floor). Satisfaction is each crew member's score over the best line they could hold alone.
+- Instances with "@0.8" keep 0.8 of the crew, evenly through the seniority list (fewer crew than the trips need, so that coverage binds).
+- Mode: column-generation is weighted balance (β = 1, rank decay 0.8, no fairness floor); strict is strict seniority (coverage first, then each crew member's score in seniority order), and its "strict steps" count the certificates of its crew members (see DEVELOPERS.md, "Strict seniority"): best-alone, coverage, reserve-minimum, enumeration and no-legal-line are proofs, unproven is not. Satisfaction is each crew member's score over the best line they could hold alone.
 - "Gap to LP bound" is (bound − objective) / bound with the engine's Lagrangian bound; the greedy award has no bound. "LP bound on open time" is the engine's lower bound on the open time any award can reach.
 
 ${table}
