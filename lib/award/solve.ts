@@ -1,5 +1,6 @@
 /**
- * The award engine (weighted balance): instance in, award out.
+ * The award engine: instance in, award out, in weighted balance or in strict
+ * seniority (settings.mode).
  *
  * 1. prepare — eligibility and networks (problem.ts), each crew member's best
  *    line alone (best_i, for satisfaction), and the greedy award as a first
@@ -15,6 +16,9 @@
  *    term in L(y) is generated (no other line can be part of a better integer
  *    solution) and the integer solve repeated: when that enumeration
  *    completes, the award is optimal.
+ *
+ * Strict seniority replaces steps 3 and 4 with one step per crew member in
+ * seniority order (strictSteps below; DEVELOPERS.md, "Strict seniority").
  *
  * The LP bound reported is the best Lagrangian bound L(y) of the pricing
  * rounds (Master.lagrangianBound: valid at any duals, even when pricing
@@ -396,8 +400,8 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
           from + (to - from) * fraction,
           `${phase === "coverage" ? "Covering the trips" : phase === "wishes" ? "Granting wishes" : `Seniority ${problem.crew[stepCrew]!.crew.seniority}`}: round ${rounds}, ${master.columns.length} lines, LP ${lp.objective.toFixed(3)}`,
         );
-        // (Strict seniority counts the limit per step.)
-        if ((phase === "strict" ? round + 1 : rounds) >= roundLimit) {
+        // (Strict seniority counts the limit per probe.)
+        if ((phase === "probe" ? round + 1 : rounds) >= roundLimit) {
           stoppedBy = "iteration-limit";
           return result(lp, false);
         }
@@ -578,11 +582,14 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
      * 1. the incumbent already gives k their best line alone (proven by the
      *    exhausted search of pricing.ts) — nothing can be better;
      * 2. the integer solve on the lines generated so far, from the incumbent,
-     *    reaches k's best line alone — the witness is that award;
-     * 3. else column generation on the step's master bounds k's score over
-     *    every line of everyone; an integer solve that meets the bound is
-     *    optimal, and otherwise the gap is closed as in balanced mode (every
-     *    line that could be part of a better award is enumerated).
+     *    stopping at k's best line alone if it reaches it (the witness is that
+     *    award), then swaps with more junior colleagues that raise k's score;
+     * 3. else coverage probes above k's score z (probeAbove): one proves that
+     *    no award gives k more, or finds one that does (z rises, probe again),
+     *    or decides nothing and the step stays unproven.
+     *
+     * After the last step, passes of swaps in seniority order until none is
+     * left (only unproven steps can gain by one).
      *
      * Every step starts from the previous step's award, which meets all the
      * floors, and the master keeps its lines and basis from step to step. A
