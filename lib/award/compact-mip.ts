@@ -29,15 +29,15 @@
  * checkCrewLine and, when illegal, loses pairings from the end until legal, or
  * becomes reserve; every line is then scored exactly by assembleAward.
  */
-import type { ModelData } from "highs";
+import type { Highs, ModelData } from "highs";
 import type { Instance, Stats, TripSelection } from "../domain/index.ts";
 import { AppError, matchesTripSelection, pairingDates, rankWeight } from "../domain/index.ts";
 import { assembleAward, type Choice } from "./assemble.ts";
 import { greedyChoices } from "./greedy.ts";
 import { loadHighs } from "./master.ts";
-import { checkCrewLine, prepareProblem, successorPositions } from "./problem.ts";
+import { checkCrewLine, prepareProblem, successorPositions, type AwardProblem } from "./problem.ts";
 import { BEST_LINE_NODES, bestScores } from "./pricing.ts";
-import type { AwardResult } from "./solve.ts";
+import type { AwardResult, AwardReport } from "./solve.ts";
 
 export interface CompactMipOptions {
   /** HiGHS time limit (default: settings.timeLimitSeconds), counted from the call */
@@ -73,40 +73,63 @@ class Mip {
   }
 }
 
-export async function compactMipAward(instance: Instance, options: CompactMipOptions = {}): Promise<AwardResult> {
-  const { settings } = instance;
-  if (settings.mode !== "balanced") throw new AppError("invalid", `settings.mode is "${settings.mode}"; the compact baseline awards in "balanced" mode only`);
-  const t0 = performance.now();
-  const limitSeconds = options.timeLimitSeconds ?? settings.timeLimitSeconds;
-  const problem = prepareProblem(instance);
-  const t1 = performance.now();
-  const alone = bestScores(problem, BEST_LINE_NODES);
-  const best = alone.best;
-  const t2 = performance.now();
+/** The compact model of one award group, with the parts each objective is made of. */
+interface CompactModel {
+  m: Mip;
+  /** K: one unit of coverage cost outweighs every wish (the balanced objective's weighting) */
+  K: number;
+  /** P = Σ_p d_p: open credit minutes first, ties by open positions */
+  P: number;
+  /** the balanced objective's constants, kept out of HiGHS */
+  offset: number;
+  noLineWeight: number;
+  reserveCols: number[];
+  xCols: number[][];
+  /** the coverage cost Σ (1 + P) c_p u_p + u_p, as terms */
+  coverTerms: [number, number][];
+  /**
+   * per crew member, their score in the model: lineBase_i + Σ terms (the
+   * reserve column carries −lineBase_i, each wish column its rank weight);
+   * empty terms when they have no legal line (best_i ≤ 0)
+   */
+  scoreTerms: [number, number][][];
+  lineBase: number[];
+}
+
+function buildCompactModel(problem: AwardProblem, best: readonly number[], provenNoLine: readonly boolean[]): CompactModel {
   const { pairings, need, crew } = problem;
+  const { settings } = problem.instance;
   const { zone, periodStart, periodEnd } = problem.score;
-  const warnings: string[] = [];
   const B = settings.baseLineValue;
   const P = need.reduce((t, d) => t + d, 0);
   const scale = crew.map((c, i) => (best[i]! > 0 ? c.weight / best[i]! : 0));
   const K = 1 + crew.reduce((t, c, i) => t + scale[i]! * c.wishes.reduce((s, _, r) => s + rankWeight(r, settings.rankDecay), B), 0);
   const noLineWeight = crew.reduce((t, c, i) => t + (best[i]! <= 0 ? c.weight : 0), 0);
-  let offset = noLineWeight; // constants of the objective, kept out of HiGHS
+  let offset = noLineWeight;
 
   const m = new Mip();
-  const cover = pairings.map((p, k) => [[m.col(-K * ((1 + P) * p.creditMinutes + 1), 0, need[k]!), 1] as [number, number]]);
+  const coverTerms: [number, number][] = [];
+  const cover = pairings.map((p, k) => {
+    const u = m.col(-K * ((1 + P) * p.creditMinutes + 1), 0, need[k]!);
+    coverTerms.push([u, (1 + P) * p.creditMinutes + 1]);
+    return [[u, 1] as [number, number]];
+  });
   const dates = pairings.map((p) => pairingDates(p, zone));
   const inPeriod = (d: string) => d >= periodStart && d <= periodEnd;
   const reserveCols: number[] = [];
   const xCols: number[][] = [];
+  const scoreTerms: [number, number][][] = [];
+  const lineBase: number[] = [];
   crew.forEach((c, i) => {
     const w = scale[i]!;
     const buddyMet = problem.score.buddyLine ? 1 : 0;
-    const lineBase = c.wishes.reduce((t, wish, r) => t + (wish.kind === "rhythm" ? 1 : wish.kind === "buddy" ? buddyMet : 0) * rankWeight(r, settings.rankDecay), B);
-    offset += w * lineBase;
-    const fixedReserve = best[i]! <= 0 && (alone.exhausted[i] || c.eligible.length === 0); // proven: no legal line
-    const r = m.col(-w * lineBase, fixedReserve ? 1 : 0, 1, true);
+    const base = c.wishes.reduce((t, wish, r) => t + (wish.kind === "rhythm" ? 1 : wish.kind === "buddy" ? buddyMet : 0) * rankWeight(r, settings.rankDecay), B);
+    lineBase.push(base);
+    offset += w * base;
+    const r = m.col(-w * base, provenNoLine[i] ? 1 : 0, 1, true);
     reserveCols.push(r);
+    const terms: [number, number][] = w === 0 ? [] : [[r, -base]];
+    scoreTerms.push(terms);
     const x = c.eligible.map((k) => {
       const col = m.col(0, 0, 1, true);
       cover[k]!.push([col, 1]);
@@ -140,6 +163,7 @@ export async function compactMipAward(instance: Instance, options: CompactMipOpt
     c.wishes.forEach((wish, rank) => {
       if (wish.kind === "rhythm" || wish.kind === "buddy" || w === 0) return;
       const y = m.col(w * rankWeight(rank, settings.rankDecay), 0, 1);
+      terms.push([y, rankWeight(rank, settings.rankDecay)]);
       m.row(-Infinity, 1, [[y, 1], [r, 1]]);
       const selected = (sel: TripSelection) => x.filter((_, j) => matchesTripSelection(sel, pairings[c.eligible[j]!]!, zone));
       switch (wish.kind) {
@@ -167,6 +191,56 @@ export async function compactMipAward(instance: Instance, options: CompactMipOpt
   const noLine = best.filter((b) => b <= 0).length;
   const reserveMax = Math.max(noLine, settings.reserve.max ?? crew.length);
   if (settings.reserve.min > 0 || reserveMax < crew.length) m.row(settings.reserve.min, reserveMax, reserveCols.map((col) => [col, 1] as const));
+  return { m, K, P, offset, noLineWeight, reserveCols, xCols, coverTerms, scoreTerms, lineBase };
+}
+
+/** The group prepared, each crew member's best line alone, and the compact model, with the times of each. */
+function prepareCompact(instance: Instance) {
+  const t0 = performance.now();
+  const problem = prepareProblem(instance);
+  const t1 = performance.now();
+  const alone = bestScores(problem, BEST_LINE_NODES);
+  const best = alone.best;
+  const t2 = performance.now();
+  // Reserve is fixed where no line is legal, proven by an exhausted search.
+  const provenNoLine = problem.crew.map((c, i) => best[i]! <= 0 && (alone.exhausted[i] || c.eligible.length === 0));
+  return { t0, t1, t2, problem, best, compact: buildCompactModel(problem, best, provenNoLine) };
+}
+
+/** A HiGHS model status as the stats' stoppedBy (undefined: something else, reported as a warning). */
+function stoppedBy(highs: Highs, code: number): Stats["stoppedBy"] | undefined {
+  const codes = highs.constants.modelStatus;
+  return code === codes.optimal ? "optimal" : code === codes.timeLimit ? "time-limit" : code === codes.interrupted ? "cancelled" : undefined;
+}
+
+/** The award's lines from a model solution, cut back to legal (or made reserve) where the model's approximation let an illegal line through. */
+function linesFromSolution(problem: AwardProblem, model: CompactModel, sol: Float64Array | undefined, warnings: string[]): { choices: Choice[]; repaired: number } {
+  if (!sol) {
+    warnings.push("HiGHS found no integer solution; the greedy award is returned");
+    return { choices: greedyChoices(problem, 20_000), repaired: 0 };
+  }
+  let repaired = 0;
+  const choices = problem.crew.map((c, i): Choice => {
+    if (sol[model.reserveCols[i]!]! > 0.5) return { reserve: true, pairings: [] };
+    const line = c.eligible.filter((_, j) => sol[model.xCols[i]![j]!]! > 0.5); // already by report time
+    const before = line.length;
+    while (line.length && !checkCrewLine(problem, c, line).legal) line.pop();
+    const legal = line.length > 0 || checkCrewLine(problem, c, []).legal;
+    if (line.length < before || !legal) repaired++;
+    return legal ? { reserve: false, pairings: line } : { reserve: true, pairings: [] };
+  });
+  if (repaired) warnings.push(`${repaired} lines of the compact model were illegal and were cut back or made reserve`);
+  return { choices, repaired };
+}
+
+export async function compactMipAward(instance: Instance, options: CompactMipOptions = {}): Promise<AwardResult> {
+  const { settings } = instance;
+  if (settings.mode !== "balanced") throw new AppError("invalid", `settings.mode is "${settings.mode}"; compactMipAward awards in "balanced" mode (compactStrictAward: strict seniority)`);
+  const limitSeconds = options.timeLimitSeconds ?? settings.timeLimitSeconds;
+  const { t0, t1, t2, problem, best, compact } = prepareCompact(instance);
+  const { crew } = problem;
+  const warnings: string[] = [];
+  const { K, P, offset, noLineWeight } = compact;
 
   // Solve.
   const highs = await loadHighs();
@@ -175,14 +249,12 @@ export async function compactMipAward(instance: Instance, options: CompactMipOpt
   let dualBound = Number.NaN;
   let x: Float64Array | undefined;
   try {
-    model.passModel(m.data(highs.constants.objectiveSense.maximize));
+    model.passModel(compact.m.data(highs.constants.objectiveSense.maximize));
     const seconds = Math.max(0.01, limitSeconds - (performance.now() - t0) / 1000);
     model.options.set({ output_flag: false, random_seed: settings.seed ?? 0, time_limit: seconds, mip_rel_gap: 0, mip_abs_gap: 1e-7 });
     const result = model.run({ [highs.constants.callbackType.mipInterrupt]: (e: { interrupt(): void }) => void (options.shouldStop?.() && e.interrupt()) });
-    const codes = highs.constants.modelStatus;
-    const code = result.modelStatus;
-    status = code === codes.optimal ? "optimal" : code === codes.timeLimit ? "time-limit" : code === codes.interrupted ? "cancelled" : undefined;
-    if (!status) warnings.push(`HiGHS ended with model status ${code}`);
+    status = stoppedBy(highs, result.modelStatus);
+    if (!status) warnings.push(`HiGHS ended with model status ${result.modelStatus}`);
     dualBound = Number(model.info.get("mip_dual_bound"));
     if (Number(model.info.get("primal_solution_status")) === highs.constants.solutionStatus.feasible) x = model.getSolution().colValue;
   } finally {
@@ -191,24 +263,7 @@ export async function compactMipAward(instance: Instance, options: CompactMipOpt
   const t3 = performance.now();
 
   // Lines: from the MIP, made legal; the greedy award when HiGHS found no solution.
-  let repaired = 0;
-  let choices: Choice[];
-  if (x) {
-    const sol = x;
-    choices = crew.map((c, i): Choice => {
-      if (sol[reserveCols[i]!]! > 0.5) return { reserve: true, pairings: [] };
-      const line = c.eligible.filter((_, j) => sol[xCols[i]![j]!]! > 0.5); // already by report time
-      const before = line.length;
-      while (line.length && !checkCrewLine(problem, c, line).legal) line.pop();
-      const legal = line.length > 0 || checkCrewLine(problem, c, []).legal;
-      if (line.length < before || !legal) repaired++;
-      return legal ? { reserve: false, pairings: line } : { reserve: true, pairings: [] };
-    });
-    if (repaired) warnings.push(`${repaired} lines of the compact model were illegal and were cut back or made reserve`);
-  } else {
-    warnings.push("HiGHS found no integer solution; the greedy award is returned");
-    choices = greedyChoices(problem, 20_000);
-  }
+  const { choices, repaired } = linesFromSolution(problem, compact, x, warnings);
   const assembled = assembleAward(problem, choices, best);
   const objective = assembled.weightedSatisfaction;
 
@@ -258,3 +313,117 @@ export async function compactMipAward(instance: Instance, options: CompactMipOpt
     },
   };
 }
+
+/** How far the stacked objectives of compactStrictAward got. */
+export interface StackedProgress {
+  /** crew members (with a legal line) whose step ended proven optimal in the model, in seniority order */
+  settled: number;
+  /** crew members with a legal line: the steps after coverage */
+  steps: number;
+  /** the coverage step ended proven optimal */
+  coverage: boolean;
+  /** why the stacking stopped short, when it did */
+  stoppedAt?: string;
+}
+
+/**
+ * Strict seniority with the compact model and stacked objectives: the
+ * textbook way, and the baseline strict mode of the engine (solve.ts) is
+ * measured against. The same model as compactMipAward; first its coverage
+ * cost is minimised and kept as a row (≤ the optimum); then, in seniority
+ * order, each crew member's model score is maximised and kept as a floor
+ * (≥ the optimum − 1e-6), every solve starting from the last one's solution.
+ * The lines are then made legal and scored exactly as compactMipAward's.
+ *
+ * A step that ends at the time limit keeps its incumbent and ends the
+ * stacking: `progress` says how far it got. The model is a relaxation
+ * (rhythm and buddy wishes count as met, legality is approximated), so its
+ * lexicographic optimum can differ from the engine's: a comparison counts
+ * only instances where both reach the same scores.
+ */
+export async function compactStrictAward(instance: Instance, options: CompactMipOptions = {}): Promise<AwardResult & { progress: StackedProgress }> {
+  const { settings } = instance;
+  if (settings.mode !== "strict") throw new AppError("invalid", `settings.mode is "${settings.mode}"; compactStrictAward awards in "strict" mode`);
+  const limitSeconds = options.timeLimitSeconds ?? settings.timeLimitSeconds;
+  const { t0, t1, t2, problem, best, compact } = prepareCompact(instance);
+  const { crew } = problem;
+  const warnings: string[] = [];
+  const numCols = compact.m.cols.length;
+  const steps = crew.map((_, i) => i).filter((i) => compact.scoreTerms[i]!.length > 0);
+  const progress: StackedProgress = { settled: 0, steps: steps.length, coverage: false };
+
+  const highs = await loadHighs();
+  const model = highs.createModel();
+  let x: Float64Array | undefined;
+  let status: Stats["stoppedBy"] = "optimal";
+  try {
+    model.passModel(compact.m.data(highs.constants.objectiveSense.maximize));
+    model.options.set({ output_flag: false, random_seed: settings.seed ?? 0, mip_rel_gap: 0, mip_abs_gap: 1e-7 });
+    /** Maximises Σ terms; the objective value, or undefined when the step did not end proven optimal. */
+    const step = (terms: readonly (readonly [number, number])[], name: string): number | undefined => {
+      const cost = new Float64Array(numCols);
+      for (const [col, a] of terms) cost[col] = cost[col]! + a;
+      model.changeColsCost({ kind: "range", from: 0, to: numCols - 1 }, cost);
+      if (x) model.setSolution({ colValue: x });
+      const seconds = limitSeconds - (performance.now() - t0) / 1000;
+      if (seconds <= 0) {
+        progress.stoppedAt = `the time limit, before ${name}`;
+        status = "time-limit";
+        return undefined;
+      }
+      model.options.set({ time_limit: seconds });
+      const result = model.run({ [highs.constants.callbackType.mipInterrupt]: (e: { interrupt(): void }) => void (options.shouldStop?.() && e.interrupt()) });
+      if (Number(model.info.get("primal_solution_status")) === highs.constants.solutionStatus.feasible) x = model.getSolution().colValue;
+      const ended = stoppedBy(highs, result.modelStatus);
+      if (ended === "optimal") return model.getObjectiveValue();
+      status = ended;
+      progress.stoppedAt = `${ended ?? `HiGHS model status ${result.modelStatus}`}, in ${name}`;
+      return undefined;
+    };
+    const coverage = step(compact.coverTerms.map(([col, a]) => [col, -a] as const), "the coverage step");
+    if (coverage !== undefined) {
+      progress.coverage = true;
+      // Coverage costs are integers: keep the optimum, with room for HiGHS's tolerances.
+      model.addRow(-Infinity, -coverage + 0.5, { indices: Int32Array.from(compact.coverTerms.map(([col]) => col)), values: Float64Array.from(compact.coverTerms.map(([, a]) => a)) });
+      for (const i of steps) {
+        const terms = compact.scoreTerms[i]!;
+        const score = step(terms, `the step of seniority ${crew[i]!.crew.seniority}`);
+        if (score === undefined) break;
+        model.addRow(score - FLOOR_MARGIN, Infinity, { indices: Int32Array.from(terms.map(([col]) => col)), values: Float64Array.from(terms.map(([, a]) => a)) });
+        progress.settled++;
+      }
+    }
+  } finally {
+    model.dispose();
+  }
+  const t3 = performance.now();
+  if (progress.stoppedAt) warnings.push(`the stacked objectives stopped at ${progress.stoppedAt}: ${progress.settled} of ${progress.steps} crew members settled`);
+  const { choices } = linesFromSolution(problem, compact, x, warnings);
+  const assembled = assembleAward(problem, choices, best);
+  const report: AwardReport = {
+    method: "compact-strict",
+    openCreditMinutes: assembled.openCreditMinutes,
+    openPositions: assembled.openPositions,
+    coverageLpBound: Number.NaN,
+    objective: assembled.weightedSatisfaction,
+    lpBound: Number.NaN,
+    gap: Number.NaN,
+    provenOptimal: false, // a relaxation's optimum: proven for the model only
+    illegalPairings: problem.illegal,
+    fairnessShortfalls: [],
+    best: Object.fromEntries(crew.map((c, i) => [c.crew.id, best[i]!])),
+    weights: Object.fromEntries(crew.map((c) => [c.crew.id, c.weight])),
+    warnings,
+  };
+  const stats: Stats = {
+    times: { prepare: t1 - t0, "best-lines": t2 - t1, "compact-strict": t3 - t2, assemble: performance.now() - t3 },
+    columns: 0,
+    rounds: progress.settled,
+    objective: assembled.weightedSatisfaction,
+    stoppedBy: status,
+  };
+  return { award: assembled.award, stats, report, progress };
+}
+
+/** The margin of each stacked floor: the engine's FLOOR_MARGIN (solve.ts), so both keep the same scores. */
+const FLOOR_MARGIN = 1e-6;

@@ -61,7 +61,7 @@ export interface AwardOptions {
 }
 
 export interface AwardReport {
-  method: "column-generation" | "greedy" | "compact-mip";
+  method: "column-generation" | "greedy" | "compact-mip" | "compact-strict";
   openCreditMinutes: number;
   openPositions: number;
   /** phase 1's LP bound on open credit (minutes; a lower bound) */

@@ -6,11 +6,14 @@
  * a suffix "@0.8" keeps that share of the crew (every crew member whose place in
  * seniority order falls in the kept share, spread evenly: see fewerCrew), so
  * that coverage binds. Methods: "column-generation" (balanced), "strict"
- * (column generation in strict seniority), "greedy", "compact-mip".
+ * (column generation in strict seniority), "greedy", "compact-mip" (balanced),
+ * "compact-strict" (strict seniority with the compact model and stacked
+ * objectives: the baseline of issue 6).
  */
 import type { Instance } from "../domain/index.ts";
 import { instanceSchema } from "../domain/index.ts";
 import { greedyAward, solveAward, type AwardResult } from "../award/index.ts";
+import type { StackedProgress } from "../award/compact-mip.ts";
 import { fairnessReport } from "../fairness/index.ts";
 import { generatePeriod } from "../../seed/generator/generate-period.ts";
 import { loadKasirzadeh } from "../../seed/published/kasirzadeh-2017.ts";
@@ -47,15 +50,20 @@ async function main(): Promise<void> {
   const [name, method, seconds] = process.argv.slice(2);
   if (!name || !method || !seconds) throw new Error("usage: bench-award-one <instance> <method> <seconds>");
   const base = benchInstance(name);
-  const mode = method === "strict" ? "strict" : "balanced";
+  const mode = method === "strict" || method === "compact-strict" ? "strict" : "balanced";
   const instance = instanceSchema.parse({ ...base, settings: { ...base.settings, mode, timeLimitSeconds: Number(seconds) } });
   const t0 = performance.now();
   let result: AwardResult;
+  let stacked: StackedProgress | null = null;
   if (method === "column-generation" || method === "strict") result = await solveAward(instance);
   else if (method === "greedy") result = greedyAward(instance);
   else if (method === "compact-mip") {
     const { compactMipAward } = await import("../award/compact-mip.ts");
     result = await compactMipAward(instance, { timeLimitSeconds: Number(seconds) });
+  } else if (method === "compact-strict") {
+    const { compactStrictAward } = await import("../award/compact-mip.ts");
+    const baseline = await compactStrictAward(instance, { timeLimitSeconds: Number(seconds) });
+    ({ progress: stacked, ...result } = baseline);
   } else throw new Error(`unknown method "${method}"`);
   const elapsed = (performance.now() - t0) / 1000;
   const seniority = new Map(instance.crew.map((c) => [c.id, c.seniority]));
@@ -85,6 +93,9 @@ async function main(): Promise<void> {
       stoppedBy: report.provenOptimal ? "optimal" : stats.stoppedBy === "optimal" ? "search ended" : (stats.stoppedBy ?? null),
       neighbourhoods: report.neighbourhoods ?? null,
       strictSteps: report.strictSteps ?? null,
+      stacked,
+      // strict seniority: each crew member's score in seniority order, to compare methods lexicographically
+      scores: mode === "strict" ? [...result.award.lines].sort((a, b) => seniority.get(a.crewId)! - seniority.get(b.crewId)!).map((l) => l.score) : null,
       times: stats.times,
       peakMB: process.resourceUsage().maxRSS / 1024,
     }),

@@ -5,13 +5,16 @@
  * its own process (peak memory is per method), side by side in one run on one
  * machine. Prints the table and writes it to docs/benchmarks.md.
  * Methods: column-generation (weighted balance), strict (strict seniority),
- * greedy, compact-mip; instances may carry "@0.8" (that share of the crew).
+ * greedy, compact-mip, compact-strict (strict seniority with the compact model
+ * and stacked objectives); instances may carry "@0.8" (that share of the crew).
+ * With strict and compact-strict both run, a second table compares them where
+ * both reach the same lexicographic scores.
  * `--rows FILE` renders rows already measured by bench-award-one (one JSON line
  * each) instead of running them, with `--note` saying how they were run.
  * Targets (issue 5): L weighted ≤ 3 minutes with gap ≤ 0.5 % and ≤ 2 GB;
  * coverage 100 % wherever the LP shows it possible. Issue 6: L strict ≤ 10
  * minutes and ≤ 2 GB with the audits clean; open time at 0.8 crew beside the
- * greedy award's.
+ * greedy award's; on M, strict ≥ 20× faster than compact-strict.
  */
 import { execFileSync } from "node:child_process";
 import fs from "node:fs";
@@ -51,6 +54,8 @@ interface Row {
   stoppedBy?: string | null;
   peakMB?: number;
   strictSteps?: Record<string, number> | null;
+  stacked?: { settled: number; steps: number; coverage: boolean; stoppedAt?: string } | null;
+  scores?: number[] | null;
   error?: string;
 }
 
@@ -81,8 +86,9 @@ for (const instance of values.rows ? [] : instances) {
   }
 }
 
-const steps = (s: Record<string, number> | null | undefined) =>
-  s ? Object.entries(s).sort((a, b) => b[1] - a[1]).map(([method, count]) => `${method} ${count}`).join(", ") : "—";
+const steps = (r: Row) =>
+  r.stacked ? `${r.stacked.coverage ? "coverage, " : ""}${r.stacked.settled} of ${r.stacked.steps} crew settled`
+  : r.strictSteps ? Object.entries(r.strictSteps).sort((a, b) => b[1] - a[1]).map(([method, count]) => `${method} ${count}`).join(", ") : "—";
 const f = (x: number | undefined | null, digits = 3) => (x === undefined || x === null ? "—" : x.toFixed(digits));
 const table = [
   "| instance | crew × pairings | method | time (s) | open positions | open time (h) | LP bound on open time (h) | mean sat. | min sat. | Jain | gap to LP bound | strict steps | lines | rounds | stopped by | peak memory (MB) |",
@@ -90,9 +96,37 @@ const table = [
   ...rows.map((r) =>
     r.error
       ? `| ${r.instance} | | ${r.method} | | | | | | | | | | | | ${r.error} | |`
-      : `| ${r.instance} | ${r.crew} × ${r.pairings} | ${r.method} | ${f(r.seconds, 1)} | ${r.openPositions} of ${r.positions} | ${f(r.openCreditMinutes! / 60, 1)} | ${r.method === "column-generation" || r.method === "strict" ? f(r.coverageLpBound! / 60, 1) : "—"} | ${f(r.mean)} | ${f(r.min)} | ${f(r.jain)} | ${r.method !== "strict" && r.gap !== null && r.gap !== undefined ? `${(r.gap * 100).toFixed(2)} %` : "—"} | ${steps(r.strictSteps)} | ${r.columns ?? "—"} | ${r.rounds ?? "—"} | ${r.stoppedBy ?? "—"} | ${f(r.peakMB, 0)} |`,
+      : `| ${r.instance} | ${r.crew} × ${r.pairings} | ${r.method} | ${f(r.seconds, 1)} | ${r.openPositions} of ${r.positions} | ${f(r.openCreditMinutes! / 60, 1)} | ${r.method === "column-generation" || r.method === "strict" ? f(r.coverageLpBound! / 60, 1) : "—"} | ${f(r.mean)} | ${f(r.min)} | ${f(r.jain)} | ${r.method !== "strict" && r.gap !== null && r.gap !== undefined ? `${(r.gap * 100).toFixed(2)} %` : "—"} | ${steps(r)} | ${r.columns ?? "—"} | ${r.rounds ?? "—"} | ${r.stoppedBy ?? "—"} | ${f(r.peakMB, 0)} |`,
   ),
 ].join("\n");
+
+/** The first place where two strict awards differ lexicographically (coverage, then scores in seniority order), or undefined. */
+function firstDifference(a: Row, b: Row): string | undefined {
+  if (a.openCreditMinutes !== b.openCreditMinutes || a.openPositions !== b.openPositions) return `coverage: open ${f(a.openCreditMinutes! / 60, 1)} h against ${f(b.openCreditMinutes! / 60, 1)} h`;
+  const k = a.scores!.findIndex((s, i) => Math.abs(s - b.scores![i]!) > 1e-6);
+  return k < 0 ? undefined : `seniority place ${k + 1}: ${f(a.scores![k])} against ${f(b.scores![k])}`;
+}
+const pairs = rows.flatMap((b) => {
+  const a = rows.find((r) => r.instance === b.instance && r.method === "strict");
+  return b.method === "compact-strict" && a ? [[a, b] as const] : [];
+});
+const comparison = pairs.length
+  ? [
+      "",
+      "Strict seniority against the compact MIP with stacked objectives (the same time limit; a ratio only where both end every step with the same lexicographic scores):",
+      "",
+      "| instance | strict (s) | compact-strict (s) | compact-strict's state | same lexicographic scores | speed-up |",
+      "| --- | ---: | ---: | --- | --- | ---: |",
+      ...pairs.map(([a, b]) => {
+        if (a.error || b.error) return `| ${b.instance} | ${f(a.seconds, 1)} | — | ${(b.error ?? a.error)!.slice(0, 80)} | — | — |`;
+        const done = b.stacked!.coverage && b.stacked!.settled === b.stacked!.steps;
+        const differs = a.scores && b.scores ? firstDifference(a, b) : "no scores";
+        const same = differs === undefined;
+        const state = done ? "every step ended" : `stopped at ${b.stacked!.stoppedAt}: ${b.stacked!.settled} of ${b.stacked!.steps} settled`;
+        return `| ${b.instance} | ${f(a.seconds, 1)} | ${f(b.seconds, 1)} | ${state} | ${same ? "yes" : `no (${differs})`} | ${done && same ? `${f(b.seconds! / a.seconds!, 1)}×` : "—"} |`;
+      }),
+    ].join("\n")
+  : "";
 
 const doc = `# Award benchmark
 
@@ -105,6 +139,7 @@ Written by \`npm run bench:award\` (lib/cli/bench-award.ts); do not edit by hand
 - "Gap to LP bound" is (bound − objective) / bound with the engine's Lagrangian bound; the greedy award has no bound. "LP bound on open time" is the engine's lower bound on the open time any award can reach.
 
 ${table}
+${comparison}
 `;
 fs.mkdirSync("docs", { recursive: true });
 fs.writeFileSync(values.out, doc);
