@@ -34,7 +34,7 @@ import { loadHighs, Master, type MasterColumn, type SolveOutcome } from "./maste
 import { prepareProblem, scoreLine, type AwardProblem } from "./problem.ts";
 import { BEST_LINE_NODES, bestScores, priceLines } from "./pricing.ts";
 import { improveByNeighbourhoods } from "./improve.ts";
-import { compactMipAward } from "./compact-mip.ts";
+import { compactMipAward, compactStrictAward } from "./compact-mip.ts";
 import { checkLine } from "../rules/index.ts";
 
 export type AwardPhase = "prepare" | "coverage" | "wishes" | "integer" | "done";
@@ -292,8 +292,12 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       progress("prepare", 8, "A small group: solving it whole with the compact model as well");
       const seconds = Math.min(COMPACT_SECONDS, clock.remainingSeconds(0.2));
       const started = performance.now();
-      // (In strict mode too: its balanced award is one more set of legal lines for the master.)
-      const compact = await compactMipAward(strict ? { ...instance, settings: { ...settings, mode: "balanced" } } : instance, { timeLimitSeconds: seconds, shouldStop: cancelled });
+      // In strict mode, with stacked objectives (compactStrictAward): its award
+      // keeps the coverage and the seniors' scores step by step, where the
+      // balanced award trades a senior's score for the juniors' (on the
+      // published base BAC the steps stayed unproven below the stacked award).
+      const options = { timeLimitSeconds: seconds, shouldStop: cancelled };
+      const compact = strict ? await compactStrictAward(instance, options) : await compactMipAward(instance, options);
       clock.times.compact = performance.now() - started;
       const crewIndex = new Map(problem.crew.map((c, i) => [c.crew.id, i]));
       const pairingIndex = new Map(problem.pairings.map((p, k) => [p.id, k]));
