@@ -7,8 +7,8 @@
  *
  * Checked: the swap and move audits and a whole-line legality re-check
  * (oracle/audits.ts, lib/rules and lib/domain only), every line again under
- * the data set's own limits written from its description (published.test.ts's
- * re-check), a certificate per crew member in seniority order, open time no
+ * the data set's own limits written from its description
+ * (oracle/published-limits.ts, shared with published.test.ts), a certificate per crew member in seniority order, open time no
  * worse than the greedy award's (seniority order without lookahead), and the
  * award lexicographically no worse than the compact MIP's with stacked
  * objectives (compact-mip.ts: another model of the same award, whose lines are
@@ -17,30 +17,11 @@
 import { describe, expect, it } from "vitest";
 import { greedyAward, solveAward, type StrictCertificate } from "@/lib/award";
 import { compactStrictAward } from "@/lib/award/compact-mip";
-import { awardSchema, type Instance, type Pairing } from "@/lib/domain";
+import { awardSchema, type Instance } from "@/lib/domain";
 import { fewerCrew } from "@/lib/cli/bench-award-one";
 import { loadKasirzadeh } from "@/seed/published/kasirzadeh-2017";
-import { MAX_DUTY_MIN, MONTHLY_CREDIT_MAX_MIN } from "@/seed/published/kasirzadeh-2017-rule-set";
 import { strictAudits } from "./oracle/audits.ts";
-
-const ms = (iso: string) => Date.parse(iso);
-
-/** The data set's limits on a line, from its description: no overlap, duties of at most 12 h on the legs, credit within 85 h. */
-function lineProblems(line: readonly Pairing[]): string[] {
-  const problems: string[] = [];
-  const sorted = [...line].sort((a, b) => ms(a.dutyPeriods[0]!.report) - ms(b.dutyPeriods[0]!.report));
-  sorted.forEach((p, k) => {
-    const next = sorted[k + 1];
-    if (next && ms(next.dutyPeriods[0]!.report) < ms(p.dutyPeriods.at(-1)!.release)) problems.push(`${p.id} overlaps ${next.id}`);
-    for (const d of p.dutyPeriods) {
-      const onLegs = (ms(d.legs.at(-1)!.arrival) - ms(d.legs[0]!.departure)) / 60_000;
-      if (onLegs > MAX_DUTY_MIN) problems.push(`${p.id} has a duty of ${onLegs} min`);
-    }
-  });
-  const credit = line.reduce((t, p) => t + p.creditMinutes, 0);
-  if (credit > MONTHLY_CREDIT_MAX_MIN) problems.push(`credit ${credit} min`);
-  return problems;
-}
+import { lineProblems } from "./oracle/published-limits.ts";
 
 const { instances } = loadKasirzadeh("tests/fixtures/kasirzadeh-2017/instance1", { seed: 7 });
 const small = instances.filter((i) => i.group.base === "BAA" || i.group.base === "BAC");

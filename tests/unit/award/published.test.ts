@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
-import type { Award, Instance, Pairing } from "@/lib/domain";
+import type { Award, Instance } from "@/lib/domain";
 import { awardSchema } from "@/lib/domain";
 import { solveAward } from "@/lib/award";
 import { loadKasirzadeh } from "@/seed/published/kasirzadeh-2017";
-import { MAX_DUTY_MIN, MIN_REST_IN_PAIRING_MIN, MONTHLY_CREDIT_MAX_MIN } from "@/seed/published/kasirzadeh-2017-rule-set";
+import { lineProblems } from "./oracle/published-limits.ts";
 
 // The published network: A. Kasirzadeh, M. Saddoune, F. Soumis, "Airline crew
 // scheduling: models, algorithms, and data sets", EURO Journal on
@@ -11,36 +11,6 @@ import { MAX_DUTY_MIN, MIN_REST_IN_PAIRING_MIN, MONTHLY_CREDIT_MAX_MIN } from "@
 // tests/fixtures/kasirzadeh-2017). Its published result leaves 0 % of legs open.
 // Bases BAA (7 pilots, 22 pairings) and BAC (6, 24) run here; BAB (20, 126)
 // runs in the benchmark (npm run bench), which reports its open time.
-
-const ms = (iso: string) => Date.parse(iso);
-
-/**
- * An independent re-check of a line under the data set's own limits, written
- * from the data set's description, not through lib/rules: pairings of the
- * line never overlap (report to release), each duty lasts at most 12 h and
- * each rest inside a pairing at least 8 h, both on the legs (first departure
- * to last arrival), and the line's credit stays within 85 h.
- */
-function lineProblems(line: readonly Pairing[]): string[] {
-  const problems: string[] = [];
-  const sorted = [...line].sort((a, b) => ms(a.dutyPeriods[0]!.report) - ms(b.dutyPeriods[0]!.report));
-  sorted.forEach((p, k) => {
-    const next = sorted[k + 1];
-    if (next && ms(next.dutyPeriods[0]!.report) < ms(p.dutyPeriods.at(-1)!.release)) problems.push(`${p.id} overlaps ${next.id}`);
-    p.dutyPeriods.forEach((d, j) => {
-      const onLegs = (ms(d.legs.at(-1)!.arrival) - ms(d.legs[0]!.departure)) / 60_000;
-      if (onLegs > MAX_DUTY_MIN) problems.push(`${p.id} duty ${j + 1} lasts ${onLegs} min`);
-      const following = p.dutyPeriods[j + 1];
-      if (following) {
-        const rest = (ms(following.legs[0]!.departure) - ms(d.legs.at(-1)!.arrival)) / 60_000;
-        if (rest < MIN_REST_IN_PAIRING_MIN) problems.push(`${p.id} rest after duty ${j + 1} is ${rest} min`);
-      }
-    });
-  });
-  const credit = line.reduce((t, p) => t + p.creditMinutes, 0);
-  if (credit > MONTHLY_CREDIT_MAX_MIN) problems.push(`credit ${credit} min`);
-  return problems;
-}
 
 describe("the award on the published network (Kasirzadeh, Saddoune & Soumis 2017, instance 1)", () => {
   const { instances } = loadKasirzadeh("tests/fixtures/kasirzadeh-2017/instance1", { seed: 7 });
