@@ -49,7 +49,7 @@ describe("strict seniority on the published network (Kasirzadeh, Saddoune & Soum
     // stacked baseline's legal award. (At BAC's published crew the engine once stopped 0.011 below it at
     // seniority place 2, unproven.)
     // Not yet at BAC with 0.8 of the crew: the baseline's coverage step (40–120 s here) leaves 1,601 open
-    // minutes, the engine 1,626 — its coverage LP bound is 0 there, so it cannot tell (DEVELOPERS.md, "Strict seniority").
+    // minutes, the engine at this 120 s limit 1,626 with a coverage LP bound of 0 (DEVELOPERS.md, "Strict seniority").
     if (name === "BAC, 0.8 of the crew") return;
     const baseline = await compactStrictAward(instance, { timeLimitSeconds: 60 });
     const order = new Map(instance.crew.map((c) => [c.id, c.seniority]));
