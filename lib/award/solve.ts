@@ -745,6 +745,12 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
           certificate = { step: k + 1, method: "no-legal-line", score: 0, bound: 0 };
         } else if (alone.exhausted[k] && had >= best[k]! - SCORE_TOL) {
           certificate = { step: k + 1, method: "best-alone", score: had, bound: best[k]! };
+        } else if (clock.expired(1)) {
+          // Past the time limit, the rest keep the incumbent's line (the swap passes below still
+          // raise them where a swap can): every step's integer solve and probe cost a little
+          // even with no time, which on L added 26 s past the limit.
+          certificate = { step: k + 1, method: "unproven", score: had, bound: alone.exhausted[k] ? Math.max(had, best[k]!) : null };
+          noteStop();
         } else {
           const first = integer(Infinity, undefined, false, incumbent, { value: alone.exhausted[k] ? best[k]! - SCORE_TOL : Infinity, share: 0.4 });
           let chosen = [...first.chosen].sort((x, y) => x.crew - y.crew);

@@ -60,4 +60,20 @@ describe("strict seniority on the published network (Kasirzadeh, Saddoune & Soum
     const first = ours.findIndex((v, k) => Math.abs(v - theirs[k]!) > 1e-6);
     expect(first < 0 || ours[first]! < theirs[first]!, `place ${first}: ${ours[first]} against the baseline's ${theirs[first]}`).toBe(true);
   }, 200_000);
+
+  // A run whose time limit has passed before its steps begin (as on a large group at its limit): it ends
+  // with a legal award and a certificate for every crew member, and the last swap passes still run.
+  it("past its time limit: a legal award, a certificate per crew member, the swap and move audits clean", async () => {
+    const bab = instances.find((i) => i.group.base === "BAB")!;
+    const instance: Instance = { ...bab, settings: { ...bab.settings, mode: "strict", timeLimitSeconds: 0.001 } };
+    const { award, stats } = await solveAward(instance);
+    expect(stats.stoppedBy).toBe("time-limit");
+    const parsed = awardSchema.parse(award);
+    expect(strictAudits(instance, parsed).problems).toEqual([]);
+    const certificates = parsed.lines.map((l) => l.certificate as unknown as StrictCertificate);
+    expect(certificates.map((c) => c.step)).toEqual(parsed.lines.map((_, k) => k + 1));
+    // Nothing was proven by a solve: only the evidence that needs none.
+    for (const c of certificates) expect(["unproven", "best-alone", "no-legal-line"]).toContain(c.method);
+    expect(certificates.some((c) => c.method === "unproven")).toBe(true);
+  }, 200_000);
 });
