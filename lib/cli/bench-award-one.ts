@@ -66,6 +66,16 @@ async function main(): Promise<void> {
     ({ progress: stacked, ...result } = baseline);
   } else throw new Error(`unknown method "${method}"`);
   const elapsed = (performance.now() - t0) / 1000;
+  const peakMB = process.resourceUsage().maxRSS / 1024;
+  // Strict seniority: the tests' independent audits (swap, move and whole-line legality, through lib/rules
+  // and lib/domain only), run after the clock stops.
+  let audit: { problems: number; first: string | null; swapsTried: number; movesTried: number; seconds: number } | null = null;
+  if (mode === "strict") {
+    const { strictAudits } = await import("../../tests/unit/award/oracle/audits.ts");
+    const a0 = performance.now();
+    const found = strictAudits(instance, result.award);
+    audit = { problems: found.problems.length, first: found.problems[0] ?? null, swapsTried: found.swapsTried, movesTried: found.movesTried, seconds: (performance.now() - a0) / 1000 };
+  }
   const seniority = new Map(instance.crew.map((c) => [c.id, c.seniority]));
   const fairness = fairnessReport(result.award.lines.map((l) => ({ seniority: seniority.get(l.crewId)!, satisfaction: l.satisfaction })));
   const positions = instance.pairings.reduce((t, p) => t + (p.crewNeeded[instance.group.position] ?? 0), 0);
@@ -94,10 +104,12 @@ async function main(): Promise<void> {
       neighbourhoods: report.neighbourhoods ?? null,
       strictSteps: report.strictSteps ?? null,
       stacked,
+      audit,
       // strict seniority: each crew member's score in seniority order, to compare methods lexicographically
       scores: mode === "strict" ? [...result.award.lines].sort((a, b) => seniority.get(a.crewId)! - seniority.get(b.crewId)!).map((l) => l.score) : null,
       times: stats.times,
-      peakMB: process.resourceUsage().maxRSS / 1024,
+      // (measured before the audits: they hold every line at once too, but are not the method's memory)
+      peakMB,
     }),
   );
 }

@@ -56,6 +56,7 @@ interface Row {
   strictSteps?: Record<string, number> | null;
   stacked?: { settled: number; steps: number; coverage: boolean; stoppedAt?: string } | null;
   scores?: number[] | null;
+  audit?: { problems: number; first: string | null; swapsTried: number; movesTried: number; seconds: number } | null;
   error?: string;
 }
 
@@ -89,14 +90,16 @@ for (const instance of values.rows ? [] : instances) {
 const steps = (r: Row) =>
   r.stacked ? `${r.stacked.coverage ? "coverage, " : ""}${r.stacked.settled} of ${r.stacked.steps} crew settled`
   : r.strictSteps ? Object.entries(r.strictSteps).sort((a, b) => b[1] - a[1]).map(([method, count]) => `${method} ${count}`).join(", ") : "—";
+const audits = (r: Row) =>
+  !r.audit ? "—" : r.audit.problems === 0 ? `clean (${r.audit.swapsTried} swaps, ${r.audit.movesTried} moves)` : `${r.audit.problems} problems, first: ${r.audit.first}`;
 const f = (x: number | undefined | null, digits = 3) => (x === undefined || x === null ? "—" : x.toFixed(digits));
 const table = [
-  "| instance | crew × pairings | method | time (s) | open positions | open time (h) | LP bound on open time (h) | mean sat. | min sat. | Jain | gap to LP bound | strict steps | lines | rounds | stopped by | peak memory (MB) |",
-  "| --- | --- | --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | --- | ---: | ---: | --- | ---: |",
+  "| instance | crew × pairings | method | time (s) | open positions | open time (h) | LP bound on open time (h) | mean sat. | min sat. | Jain | gap to LP bound | strict steps | audits | lines | rounds | stopped by | peak memory (MB) |",
+  "| --- | --- | --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | --- | --- | ---: | ---: | --- | ---: |",
   ...rows.map((r) =>
     r.error
-      ? `| ${r.instance} | | ${r.method} | | | | | | | | | | | | ${r.error} | |`
-      : `| ${r.instance} | ${r.crew} × ${r.pairings} | ${r.method} | ${f(r.seconds, 1)} | ${r.openPositions} of ${r.positions} | ${f(r.openCreditMinutes! / 60, 1)} | ${r.method === "column-generation" || r.method === "strict" ? f(r.coverageLpBound! / 60, 1) : "—"} | ${f(r.mean)} | ${f(r.min)} | ${f(r.jain)} | ${r.method !== "strict" && r.gap !== null && r.gap !== undefined ? `${(r.gap * 100).toFixed(2)} %` : "—"} | ${steps(r)} | ${r.columns ?? "—"} | ${r.rounds ?? "—"} | ${r.stoppedBy ?? "—"} | ${f(r.peakMB, 0)} |`,
+      ? `| ${r.instance} | | ${r.method} | | | | | | | | | | | | | ${r.error} | |`
+      : `| ${r.instance} | ${r.crew} × ${r.pairings} | ${r.method} | ${f(r.seconds, 1)} | ${r.openPositions} of ${r.positions} | ${f(r.openCreditMinutes! / 60, 1)} | ${r.method === "column-generation" || r.method === "strict" ? f(r.coverageLpBound! / 60, 1) : "—"} | ${f(r.mean)} | ${f(r.min)} | ${f(r.jain)} | ${r.method !== "strict" && r.gap !== null && r.gap !== undefined ? `${(r.gap * 100).toFixed(2)} %` : "—"} | ${steps(r)} | ${audits(r)} | ${r.columns ?? "—"} | ${r.rounds ?? "—"} | ${r.stoppedBy ?? "—"} | ${f(r.peakMB, 0)} |`,
   ),
 ].join("\n");
 
@@ -130,12 +133,13 @@ const comparison = pairs.length
 
 const doc = `# Award benchmark
 
-Written by \`npm run bench:award\` (lib/cli/bench-award.ts); do not edit by hand.
+Written by lib/cli/bench-award.ts (\`npm run bench\`); do not edit by hand.
 
 - Run: ${values.note ?? `${new Date().toISOString().slice(0, 16).replace("T", " ")} UTC on ${os.cpus().length} × ${os.cpus()[0]?.model ?? "unknown CPU"}, Node ${process.version}; every run one after the other in its own process, at a time limit of ${seconds} s.`}
 - Instances: S (30 crew, 120 pairings), M (150, 600) and L (300, 1,650), generated for 31 days with seed 1 (the fictional Larkfield Air, captains at Halvern); pubN:BASE is the published instance N (Kasirzadeh, Saddoune & Soumis 2017) at one crew base, under the data set's own rule set.
 - Instances with "@0.8" keep 0.8 of the crew, evenly through the seniority list (fewer crew than the trips need, so that coverage binds).
 - Mode: column-generation is weighted balance (β = 1, rank decay 0.8, no fairness floor); strict is strict seniority (coverage first, then each crew member's score in seniority order), and its "strict steps" count the certificates of its crew members (see DEVELOPERS.md, "Strict seniority"): best-alone, coverage, reserve-minimum, enumeration and no-legal-line are proofs, unproven is not. Satisfaction is each crew member's score over the best line they could hold alone.
+- "Audits" (strict modes): the tests' swap and move audits with a whole-line legality re-check of every line (tests/unit/award/oracle/audits.ts, through lib/rules and lib/domain only), run after the clock stops.
 - "Gap to LP bound" is (bound − objective) / bound with the engine's Lagrangian bound; the greedy award has no bound. "LP bound on open time" is the engine's lower bound on the open time any award can reach.
 
 ${table}
