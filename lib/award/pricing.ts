@@ -440,13 +440,19 @@ function compareLines(a: readonly number[], b: readonly number[]): number {
   return a.length - b.length;
 }
 
-/** The best line-holder score of each crew member alone (0 when none is legal), and whether each search was exhaustive. */
 /** Searches of this many nodes stand in for the full ones once the caller's time is up. */
 export const HURRIED_NODES = 200;
 
 /** Search nodes for each crew member's best line alone, the same for every method so satisfactions compare. */
 export const BEST_LINE_NODES = 40_000;
 
+/**
+ * The best line-holder score of each crew member alone (0 when none is legal),
+ * and whether each is proven: the search was exhaustive, or its bound is no
+ * higher than the line found (a line meeting every wish can leave the search
+ * walking subtrees whose bounds tie it in floating point, up to its node limit:
+ * on the published base pub2:BAB, 7 of 9 searches).
+ */
 export function bestScores(
   problem: AwardProblem,
   nodeLimit: number,
@@ -460,7 +466,7 @@ export function bestScores(
     const r = priceLines(problem, c, { scoreWeight: 1, cost: zero, threshold: 0, maxLines: 1, nodeLimit: hurry() ? HURRIED_NODES : nodeLimit });
     best.push(r.lines[0]?.score ?? 0);
     lines.push(r.lines[0]?.pairings);
-    exhausted.push(r.exhausted);
+    exhausted.push(r.exhausted || r.upperBound <= (r.lines[0]?.score ?? 0));
   }
   return { best, exhausted, lines };
 }

@@ -76,4 +76,16 @@ describe("strict seniority on the published network (Kasirzadeh, Saddoune & Soum
     for (const c of certificates) expect(["unproven", "best-alone", "no-legal-line"]).toContain(c.method);
     expect(certificates.some((c) => c.method === "unproven")).toBe(true);
   }, 200_000);
+
+  // Instance 2, base BAB (9 pilots, 62 pairings): every pilot can hold a line meeting all their wishes, but
+  // the search for it ties that line's score in floating point and runs to its node limit; the bound proves it.
+  it("instance 2, BAB: every crew member's best line alone is proven, and each step certified by it", async () => {
+    const second = loadKasirzadeh("tests/fixtures/kasirzadeh-2017/instance2", { seed: 7 }).instances.find((i) => i.group.base === "BAB")!;
+    const instance: Instance = { ...second, settings: { ...second.settings, mode: "strict", timeLimitSeconds: 120 } };
+    const { award, report } = await solveAward(instance);
+    expect(report.warnings.filter((w) => /best line alone not proven/.test(w))).toEqual([]);
+    const methods = award.lines.map((l) => (l.certificate as unknown as StrictCertificate).method);
+    expect(methods).toEqual(award.lines.map(() => "best-alone"));
+    expect(strictAudits(instance, awardSchema.parse(award)).problems).toEqual([]);
+  }, 200_000);
 });
