@@ -10,7 +10,8 @@
  * With strict and compact-strict both run, a second table compares them where
  * both reach the same lexicographic scores.
  * `--rows FILE` renders rows already measured by bench-award-one (one JSON line
- * each) instead of running them, with `--note` saying how they were run.
+ * each) instead of running them, with `--note` saying how they were run;
+ * `--save-rows FILE` appends each measured row to FILE as it comes.
  * Targets (issue 5): L weighted ≤ 3 minutes with gap ≤ 0.5 % and ≤ 2 GB;
  * coverage 100 % wherever the LP shows it possible. Issue 6: L strict ≤ 10
  * minutes and ≤ 2 GB with the audits clean; open time at 0.8 crew beside the
@@ -29,6 +30,7 @@ const { values } = parseArgs({
     out: { type: "string", default: "docs/benchmarks.md" },
     rows: { type: "string" },
     note: { type: "string" },
+    "save-rows": { type: "string" },
   },
 });
 const instances = values.instances.split(",");
@@ -75,6 +77,7 @@ for (const instance of values.rows ? [] : instances) {
       });
       const row = JSON.parse(out.trim().split("\n").at(-1)!) as Row;
       rows.push(row);
+      if (values["save-rows"]) fs.appendFileSync(values["save-rows"], `${JSON.stringify(row)}\n`);
       process.stderr.write(`${row.seconds!.toFixed(1)} s\n`);
     } catch (e) {
       const failed = e as { killed?: boolean; code?: string; stderr?: string; message?: string };
@@ -82,6 +85,7 @@ for (const instance of values.rows ? [] : instances) {
       const why = (failed.stderr ?? "").split("\n").filter((l) => /Error|error:/.test(l)).at(-1)?.trim();
       const message = failed.killed || failed.code === "ETIMEDOUT" ? `killed after ${Number(seconds) * 2 + 120} s` : (why ?? String(failed.message).split("\n")[0]!);
       rows.push({ instance, method, error: message });
+      if (values["save-rows"]) fs.appendFileSync(values["save-rows"], `${JSON.stringify({ instance, method, error: message })}\n`);
       process.stderr.write(`failed: ${message}\n`);
     }
   }
