@@ -37,7 +37,7 @@
  * a valid bound; tuning only tightens it.
  */
 import type { Wish } from "../domain/index.ts";
-import { matchesTripSelection, periodWeekends, rankWeight } from "../domain/index.ts";
+import { matchesTripSelection, periodWeekends } from "../domain/index.ts";
 import { daysBetween } from "../domain/time.ts";
 import type { AwardProblem, CrewProblem } from "./problem.ts";
 
@@ -98,18 +98,17 @@ function compile(problem: AwardProblem, c: CrewProblem): Compiled {
     fromDay[d] = j;
   }
   const tail = crewTails(problem, c);
-  const { rankDecay, baseLineValue } = problem.instance.settings;
   const trips: Compiled["trips"] = [];
   const dayLoss = new Float64Array(L);
   const weekendOf = new Int32Array(L).fill(-1);
   const weekends = periodWeekends(periodStart, periodEnd).map((w) => w.map((date) => daysBetween(periodStart, date)));
   weekends.forEach((w, index) => w.forEach((d) => d >= 0 && d < L && (weekendOf[d] = index)));
   let weekendLoss = 0;
-  let emptyScore = baseLineValue;
+  let emptyScore = c.baseValue;
   const parts: Part[] = [];
   const inPeriod = (d: number) => d >= 0 && d < L;
-  c.wishes.forEach((wish: Wish, rank) => {
-    const weight = rankWeight(rank, rankDecay);
+  const shared = c.members.length > 1; // a buddy unit: its members' buddy wishes are met by any line they share
+  c.weighted.forEach(({ wish, weight }: { wish: Wish; weight: number }) => {
     switch (wish.kind) {
       case "trip":
         parts.push({ kind: "trip", weight, trip: trips.length });
@@ -127,7 +126,7 @@ function compile(problem: AwardProblem, c: CrewProblem): Compiled {
         parts.push({ kind: "credit", weight, maxMinutes: wish.maxMinutes });
         break;
       case "buddy":
-        parts.push({ kind: "constant", weight: problem.score.buddyLine ? weight : 0 });
+        parts.push({ kind: "constant", weight: shared ? weight : 0 });
         break;
     }
     switch (wish.kind) {
@@ -146,7 +145,7 @@ function compile(problem: AwardProblem, c: CrewProblem): Compiled {
         break;
       }
       case "buddy":
-        if (!problem.score.buddyLine) return; // 0 without a mutual buddy line
+        if (!shared) return; // 0 outside a buddy unit
         break;
       default:
         break;
@@ -446,7 +445,7 @@ function chainPass(
  */
 export function nowScore(problem: AwardProblem, c: CrewProblem, path: readonly number[], dayCount: ArrayLike<number>, credit: number, theta: Float64Array): number {
   const cc = compile(problem, c);
-  let score = problem.instance.settings.baseLineValue;
+  let score = c.baseValue;
   for (const part of cc.parts) {
     const { weight } = part;
     switch (part.kind) {

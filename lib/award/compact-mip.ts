@@ -31,8 +31,8 @@
  */
 import type { Highs, ModelData } from "highs";
 import type { Instance, Stats, TripSelection } from "../domain/index.ts";
-import { AppError, matchesTripSelection, pairingDates, rankWeight } from "../domain/index.ts";
-import { assembleAward, type Choice } from "./assemble.ts";
+import { AppError, matchesTripSelection, pairingDates } from "../domain/index.ts";
+import { assembleAward, crewFigures, type Choice } from "./assemble.ts";
 import { greedyChoices } from "./greedy.ts";
 import { loadHighs } from "./master.ts";
 import { checkCrewLine, prepareProblem, successorPositions, type AwardProblem } from "./problem.ts";
@@ -100,10 +100,9 @@ function buildCompactModel(problem: AwardProblem, best: readonly number[], prove
   const { pairings, need, crew } = problem;
   const { settings } = problem.instance;
   const { zone, periodStart, periodEnd } = problem.score;
-  const B = settings.baseLineValue;
   const P = need.reduce((t, d) => t + d, 0);
   const scale = crew.map((c, i) => (best[i]! > 0 ? c.weight / best[i]! : 0));
-  const K = 1 + crew.reduce((t, c, i) => t + scale[i]! * c.wishes.reduce((s, _, r) => s + rankWeight(r, settings.rankDecay), B), 0);
+  const K = 1 + crew.reduce((t, c, i) => t + scale[i]! * c.weighted.reduce((s, { weight }) => s + weight, c.baseValue), 0);
   const noLineWeight = crew.reduce((t, c, i) => t + (best[i]! <= 0 ? c.weight : 0), 0);
   let offset = noLineWeight;
 
@@ -122,8 +121,9 @@ function buildCompactModel(problem: AwardProblem, best: readonly number[], prove
   const lineBase: number[] = [];
   crew.forEach((c, i) => {
     const w = scale[i]!;
-    const buddyMet = problem.score.buddyLine ? 1 : 0;
-    const base = c.wishes.reduce((t, wish, r) => t + (wish.kind === "rhythm" ? 1 : wish.kind === "buddy" ? buddyMet : 0) * rankWeight(r, settings.rankDecay), B);
+    // (A buddy unit's members' buddy wishes are met by any line they share.)
+    const buddyMet = c.members.length > 1 ? 1 : 0;
+    const base = c.weighted.reduce((t, { wish, weight }) => t + (wish.kind === "rhythm" ? 1 : wish.kind === "buddy" ? buddyMet : 0) * weight, c.baseValue);
     lineBase.push(base);
     offset += w * base;
     const r = m.col(-w * base, provenNoLine[i] ? 1 : 0, 1, true);
@@ -132,7 +132,7 @@ function buildCompactModel(problem: AwardProblem, best: readonly number[], prove
     scoreTerms.push(terms);
     const x = c.eligible.map((k) => {
       const col = m.col(0, 0, 1, true);
-      cover[k]!.push([col, 1]);
+      cover[k]!.push([col, c.members.length]);
       return col;
     });
     xCols.push(x);
@@ -160,10 +160,10 @@ function buildCompactModel(problem: AwardProblem, best: readonly number[], prove
     };
     const periodDates = [...touching.keys()].filter(inPeriod);
     if (periodDates.length > c.maxWorkedDays) m.row(-Infinity, c.maxWorkedDays, periodDates.map((d) => [day(d), 1] as const));
-    c.wishes.forEach((wish, rank) => {
+    c.weighted.forEach(({ wish, weight }) => {
       if (wish.kind === "rhythm" || wish.kind === "buddy" || w === 0) return;
-      const y = m.col(w * rankWeight(rank, settings.rankDecay), 0, 1);
-      terms.push([y, rankWeight(rank, settings.rankDecay)]);
+      const y = m.col(w * weight, 0, 1);
+      terms.push([y, weight]);
       m.row(-Infinity, 1, [[y, 1], [r, 1]]);
       const selected = (sel: TripSelection) => x.filter((_, j) => matchesTripSelection(sel, pairings[c.eligible[j]!]!, zone));
       switch (wish.kind) {
@@ -188,9 +188,11 @@ function buildCompactModel(problem: AwardProblem, best: readonly number[], prove
     });
   });
   cover.forEach((terms, k) => m.row(need[k]!, need[k]!, terms));
-  const noLine = best.filter((b) => b <= 0).length;
-  const reserveMax = Math.max(noLine, settings.reserve.max ?? crew.length);
-  if (settings.reserve.min > 0 || reserveMax < crew.length) m.row(settings.reserve.min, reserveMax, reserveCols.map((col) => [col, 1] as const));
+  // Reserve lines count crew members: a buddy unit's reserve line is two.
+  const members = crew.reduce((t, c) => t + c.members.length, 0);
+  const noLine = crew.reduce((t, c, i) => t + (best[i]! <= 0 ? c.members.length : 0), 0);
+  const reserveMax = Math.max(noLine, settings.reserve.max ?? members);
+  if (settings.reserve.min > 0 || reserveMax < members) m.row(settings.reserve.min, reserveMax, reserveCols.map((col, i) => [col, crew[i]!.members.length] as const));
   return { m, K, P, offset, noLineWeight, reserveCols, xCols, coverTerms, scoreTerms, lineBase };
 }
 
@@ -307,8 +309,7 @@ export async function compactMipAward(instance: Instance, options: CompactMipOpt
       provenOptimal: status === "optimal" && gap <= 1e-7,
       illegalPairings: problem.illegal,
       fairnessShortfalls: [],
-      best: Object.fromEntries(crew.map((c, i) => [c.crew.id, best[i]!])),
-      weights: Object.fromEntries(crew.map((c) => [c.crew.id, c.weight])),
+      ...crewFigures(problem, best),
       warnings,
     },
   };
@@ -411,8 +412,7 @@ export async function compactStrictAward(instance: Instance, options: CompactMip
     provenOptimal: false, // a relaxation's optimum: proven for the model only
     illegalPairings: problem.illegal,
     fairnessShortfalls: [],
-    best: Object.fromEntries(crew.map((c, i) => [c.crew.id, best[i]!])),
-    weights: Object.fromEntries(crew.map((c) => [c.crew.id, c.weight])),
+    ...crewFigures(problem, best),
     warnings,
   };
   const stats: Stats = {

@@ -100,21 +100,22 @@ function shuffled<T>(items: readonly T[], random: () => number): T[] {
   return out;
 }
 
-/** Open positions per pairing under a full award (one column per crew member). */
-function openPositions(need: ReadonlyMap<number, number>, columns: readonly MasterColumn[]): Map<number, number> {
+/** Open positions per pairing under a full award (one column per crew member; `size`: the crew members behind a column, 2 for a buddy unit). */
+function openPositions(need: ReadonlyMap<number, number>, columns: readonly MasterColumn[], size: (col: MasterColumn) => number): Map<number, number> {
   const left = new Map(need);
-  for (const col of columns) for (const p of col.pairings) left.set(p, (left.get(p) ?? 0) - 1);
+  for (const col of columns) for (const p of col.pairings) left.set(p, (left.get(p) ?? 0) - size(col));
   return left;
 }
 
 export function improveByNeighbourhoods(input: ImproveInput): ImproveResult {
   const { problem, need, openCost } = input;
   const cover = input.coverage;
+  const membersOf = (col: MasterColumn) => problem.crew[col.crew]!.members.length;
   /** The objective being improved, of a full award. */
   const valueOf = (cols: readonly MasterColumn[]) => {
     if (!cover) return awardValue(input, cols);
     let open = 0;
-    for (const [p, left] of openPositions(need, cols)) open += openCost.get(p)! * Math.max(0, left);
+    for (const [p, left] of openPositions(need, cols, membersOf)) open += openCost.get(p)! * Math.max(0, left);
     return -open + cover.tieBreak * cols.reduce((t, col) => t + input.coefficient(col), 0);
   };
   const n = problem.crew.length;
@@ -183,7 +184,7 @@ export function improveByNeighbourhoods(input: ImproveInput): ImproveResult {
   for (let pass = 0; !out(); pass++) {
     let passImproved = false;
     if (cover) {
-      const open = [...openPositions(need, columns)].filter(([, left]) => left > 0).map(([p]) => p);
+      const open = [...openPositions(need, columns, membersOf)].filter(([, left]) => left > 0).map(([p]) => p);
       open.sort((a, b) => openCost.get(b)! - openCost.get(a)! || a - b);
       for (const p of open) {
         if (out()) break;
@@ -243,9 +244,9 @@ export function improveByNeighbourhoods(input: ImproveInput): ImproveResult {
     const inGroup = new Set(group);
     // Positions the group may fill: what it holds now plus what is open.
     const covered = new Map<number, number>();
-    for (const col of columns) for (const p of col.pairings) covered.set(p, (covered.get(p) ?? 0) + 1);
+    for (const col of columns) for (const p of col.pairings) covered.set(p, (covered.get(p) ?? 0) + membersOf(col));
     const subNeed = new Map<number, number>();
-    for (const i of group) for (const p of columns[i]!.pairings) subNeed.set(p, (subNeed.get(p) ?? 0) + 1);
+    for (const i of group) for (const p of columns[i]!.pairings) subNeed.set(p, (subNeed.get(p) ?? 0) + membersOf(columns[i]!));
     let openNow = 0;
     for (const [p, d] of need) {
       const open = d - (covered.get(p) ?? 0);
@@ -254,11 +255,15 @@ export function improveByNeighbourhoods(input: ImproveInput): ImproveResult {
       openNow += openCost.get(p)! * open;
     }
     const pool = new Set(subNeed.keys());
-    const reservesOutside = columns.filter((col, i) => col.reserve && !inGroup.has(i)).length;
-    const master = new Master(input.highs, group.length, subNeed, {
-      min: Math.max(0, input.reserve.min - reservesOutside),
-      max: Math.max(0, input.reserve.max - reservesOutside),
-    });
+    const reservesOutside = columns.reduce((t, col, i) => t + (col.reserve && !inGroup.has(i) ? membersOf(col) : 0), 0);
+    const sizes = group.map((i) => problem.crew[i]!.members.length);
+    const master = new Master(
+      input.highs,
+      group.length,
+      subNeed,
+      { min: Math.max(0, input.reserve.min - reservesOutside), max: Math.max(0, input.reserve.max - reservesOutside) },
+      sizes,
+    );
     try {
       const sub = (col: MasterColumn, s: number): MasterColumn => ({ ...col, crew: s });
       const whole = (col: MasterColumn): MasterColumn => ({ ...col, crew: group[col.crew]! });
@@ -301,7 +306,7 @@ export function improveByNeighbourhoods(input: ImproveInput): ImproveResult {
       if (chosen.length !== group.length || new Set(chosen.map((c) => c.crew)).size !== group.length) return undefined;
       const next = group.map((_, s) => chosen.find((c) => c.crew === s)!);
       // Exact cover of what the group may fill, no more open time than now, and a better objective.
-      const left = openPositions(subNeed, next);
+      const left = openPositions(subNeed, next, (col) => sizes[col.crew]!);
       if ([...left.values()].some((v) => v < 0)) return undefined;
       const openAfter = [...left].reduce((t, [p, v]) => t + openCost.get(p)! * v, 0);
       if (openAfter > openNow + 1e-6) return undefined;

@@ -76,7 +76,10 @@ export class Master {
     crewCount: number,
     /** pairing index → crew needed (only pairings someone may fly) */
     private readonly need: ReadonlyMap<number, number>,
+    /** reserve lines allowed, counted in crew members */
     reserve: { min: number; max: number },
+    /** crew members behind each crew row (a buddy unit: 2, its line filling two positions of each trip); 1 when absent */
+    private readonly sizes: readonly number[] = [],
   ) {
     this.crewColumns = Array.from({ length: crewCount }, () => []);
     this.model = highs.createModel();
@@ -93,7 +96,8 @@ export class Master {
       rowLower.push(d);
       rowUpper.push(d);
     }
-    if (reserve.min > 0 || reserve.max < crewCount) {
+    const members = this.sizes.reduce((t, x) => t + x - 1, crewCount);
+    if (reserve.min > 0 || reserve.max < members) {
       this.reserveRow = rowLower.length;
       rowLower.push(reserve.min);
       rowUpper.push(reserve.max);
@@ -164,13 +168,14 @@ export class Master {
     this.keys.add(key);
     const indices = [this.crewRow[column.crew]!];
     const values = [1];
+    const size = this.sizes[column.crew] ?? 1;
     for (const p of column.pairings) {
       indices.push(this.coverRow.get(p)!);
-      values.push(1);
+      values.push(size);
     }
     if (column.reserve && this.reserveRow >= 0) {
       indices.push(this.reserveRow);
-      values.push(1);
+      values.push(size);
     }
     const fair = this.fairRow[column.crew];
     if (fair !== undefined && fairness !== 0) {
@@ -383,7 +388,7 @@ export class Master {
    */
   crewTerm(y: Float64Array, line: number, i: number): number {
     if ((this.minScore[i] ?? 0) > 0) return line;
-    return Math.max(line, this.reserveRow >= 0 ? -y[this.reserveRow]! : 0);
+    return Math.max(line, this.reserveRow >= 0 ? -(this.sizes[i] ?? 1) * y[this.reserveRow]! : 0);
   }
 
   /** Values of the master columns in the last solve. */
@@ -427,7 +432,7 @@ export class Master {
       this.columns.forEach((c, k) => {
         if (!chosen.has(Master.key(c))) return;
         x[this.colIndex[k]!] = 1;
-        for (const p of c.pairings) open.set(p, (open.get(p) ?? 0) - 1);
+        for (const p of c.pairings) open.set(p, (open.get(p) ?? 0) - (this.sizes[c.crew] ?? 1));
       });
       for (const [p, col] of this.openCol) x[col] = Math.max(0, open.get(p) ?? 0);
       this.model.setSolution({ colValue: x });

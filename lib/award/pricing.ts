@@ -41,7 +41,7 @@ import { scoreLine, successorPositions, type AwardProblem, type CrewProblem } fr
 export interface PriceRequest {
   /** weight of the line's score in its value (0: legality and costs only) */
   scoreWeight: number;
-  /** cost of each pairing (by pairing index) */
+  /** cost of each pairing (by pairing index), per crew member flying it: a buddy unit pays it twice */
   cost: ArrayLike<number>;
   /** only lines of value above this are returned */
   threshold: number;
@@ -92,12 +92,10 @@ const plans = new WeakMap<CrewProblem, WishPlan[]>();
 function wishPlans(problem: AwardProblem, c: CrewProblem): WishPlan[] {
   let known = plans.get(c);
   if (known) return known;
-  const { rankDecay } = problem.instance.settings;
   const { zone, periodStart, periodEnd } = problem.score;
   const dayIndex = (date: string) => daysBetween(periodStart, date);
   const inPeriod = (d: number) => d >= 0 && d < problem.periodLength;
-  known = c.wishes.map((wish, rank): WishPlan => {
-    const weight = rankWeight(rank, rankDecay);
+  known = c.weighted.map(({ wish, weight }): WishPlan => {
     switch (wish.kind) {
       case "trip":
       case "no-trip": {
@@ -138,7 +136,7 @@ function longestRun(dayCount: ArrayLike<number>): number {
  * free days — the share of named dates not yet worked inside the period; rhythm
  * — its score on the period days worked so far (runs only lengthen and weekends
  * only fill); a credit maximum already exceeded — its present score; a credit
- * minimum — 1; buddy — 0 without a mutual buddy line. Dates outside the period
+ * minimum — 1; buddy — 1 in a buddy unit (the members share the line), else 0. Dates outside the period
  * are taken as free, which can only raise the bound. The exact score is always
  * lineScore's; a property test checks these bounds against it.
  */
@@ -150,7 +148,7 @@ export function wishBounds(
   credit: number,
   from: number,
 ): { ahead: number; here: number } {
-  let ahead = problem.instance.settings.baseLineValue;
+  let ahead = c.baseValue;
   let here = ahead;
   let longest = -1;
   for (const plan of wishPlans(problem, c)) {
@@ -192,7 +190,7 @@ export function wishBounds(
         part = wish.maxMinutes !== undefined && credit > wish.maxMinutes ? wish.maxMinutes / credit : 1;
         break;
       case "buddy":
-        part = problem.score.buddyLine ? 1 : 0;
+        part = c.members.length > 1 ? 1 : 0;
         break;
     }
     ahead += plan.weight * part;
@@ -221,7 +219,9 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   const m = eligible.length;
   const allowed = request.allowed;
   const usable = Uint8Array.from(eligible, (k) => (allowed && !allowed(k) ? 0 : 1));
-  const gain = Float64Array.from(eligible, (k) => -request.cost[k]!);
+  // A buddy unit's line fills one position per member on each of its trips.
+  const size = c.members.length;
+  const gain = Float64Array.from(eligible, (k) => -size * request.cost[k]!);
   // The usable positions, last first (a pool of a few trips makes the whole search small).
   const backwards: number[] = [];
   for (let j = m - 1; j >= 0; j--) if (usable[j]) backwards.push(j);
@@ -320,15 +320,21 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
   // With the node limit reached: the best bound among the subtrees not yet searched.
   let frontier = -Infinity;
   // states[d]: the engine after path[0..d-1]; states[0] is the fresh line.
-  const states: (LineState | undefined)[] = [start(c.crew, problem.instance.ruleSet, problem.engine)];
+  // For a buddy unit, one state per member: the line must be legal for both.
+  const states: (LineState[] | undefined)[] = [c.members.map((m) => start(m, problem.instance.ruleSet, problem.engine))];
 
   /** The engine's state after the whole path, or the depth whose trip breaks a duty rule. */
-  const engineState = (): LineState | number => {
+  const engineState = (): LineState[] | number => {
     for (let d = 1; d <= path.length; d++) {
       if (states[d]) continue;
-      const r = extendAll(states[d - 1]!, { kind: "pairing", pairing: pairings[eligible[path[d - 1]!]!]! });
-      if (r.violations.length) return d;
-      states[d] = r.state;
+      const item = { kind: "pairing" as const, pairing: pairings[eligible[path[d - 1]!]!]! };
+      const next: LineState[] = [];
+      for (const before of states[d - 1]!) {
+        const r = extendAll(before, item);
+        if (r.violations.length) return d;
+        next.push(r.state);
+      }
+      states[d] = next;
     }
     return states[path.length]!;
   };
@@ -353,7 +359,7 @@ export function priceLines(problem: AwardProblem, c: CrewProblem, request: Price
       if (value > floor && score >= minScore) {
         const state = engineState();
         if (typeof state === "number") return state;
-        if (finish(state).legal) admit({ pairings: path.map((j) => eligible[j]!), score, value });
+        if (state.every((one) => finish(one).legal)) admit({ pairings: path.map((j) => eligible[j]!), score, value });
       }
     }
     const { list: next, boundFrom } = path.length === 0 ? root : children(path.at(-1)!);
@@ -471,3 +477,31 @@ export function bestScores(
   return { best, exhausted, lines };
 }
 
+
+const unitBests = new WeakMap<AwardProblem, Map<number, number[]>>();
+
+/**
+ * Each bidder's members' best scores alone (`best`, by AwardProblem.crew
+ * index: each bidder's best line alone): a crew member's is `best`; a buddy
+ * unit member's is their own best score over the lines the unit may share
+ * (searched once per problem, BEST_LINE_NODES nodes), since the unit flies one
+ * line together.
+ */
+export function memberBests(problem: AwardProblem, best: readonly number[]): number[][] {
+  let known = unitBests.get(problem);
+  if (!known) unitBests.set(problem, (known = new Map()));
+  const zero = new Float64Array(problem.pairings.length);
+  return problem.crew.map((c, i) => {
+    if (c.members.length === 1) return [best[i]!];
+    let scores = known.get(i);
+    if (!scores) {
+      const { rankDecay, baseLineValue } = problem.instance.settings;
+      scores = c.memberWishes.map((wishes) => {
+        const alone: CrewProblem = { ...c, memberWishes: [wishes], weighted: wishes.map((wish, r) => ({ wish, weight: rankWeight(r, rankDecay) })), baseValue: baseLineValue };
+        return priceLines(problem, alone, { scoreWeight: 1, cost: zero, threshold: 0, maxLines: 1, nodeLimit: BEST_LINE_NODES }).lines[0]?.score ?? 0;
+      });
+      known.set(i, scores);
+    }
+    return scores;
+  });
+}

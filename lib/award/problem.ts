@@ -5,19 +5,35 @@
  * one may fly because they break the rule set by themselves.
  */
 import type { CrewMember, Instance, Pairing, Wish } from "../domain/index.ts";
-import { lineScore, type ScoreContext } from "../domain/index.ts";
+import { lineScore, rankWeight, type ScoreContext } from "../domain/index.ts";
 import { pairingDates } from "../domain/pairing-facts.ts";
 import { daysBetween, instantMs, localDatesTouched } from "../domain/time.ts";
-import { canFollow, checkLine, dutyRulesOnly, extendAll, requiredDaysOff, start, type EngineContext, type LineResult } from "../rules/index.ts";
+import { canFollow, checkLine, dutyRulesOnly, extendAll, finish, requiredDaysOff, start, type EngineContext, type LineResult } from "../rules/index.ts";
 
+/**
+ * One bidder of the award: a crew member, or a buddy unit — two crew members
+ * of the group who named each other in buddy wishes, awarded one shared line
+ * (both fly its trips) at the junior member's seniority (DESIGN.md's contract;
+ * see buddyUnits below for when a pair forms one).
+ */
 export interface CrewProblem {
+  /** the crew member; for a buddy unit its junior member, whose place in seniority order the unit takes */
   crew: CrewMember;
-  /** 0 = most senior */
+  /** who holds the line: the crew member alone, or the unit's two members, senior first */
+  members: readonly CrewMember[];
+  /** each member's wishes, in the order of `members` */
+  memberWishes: readonly (readonly Wish[])[];
+  /** 0 = most senior (the index in AwardProblem.crew) */
   rank: number;
-  /** W_i: see seniorityWeight() */
+  /** W_i: see seniorityWeight(); a unit's is the sum of its members' weights at the junior's place */
   weight: number;
-  wishes: readonly Wish[];
-  /** pairing indices this crew member may fly, by report time */
+  /** each member's part of `weight` */
+  memberWeights: readonly number[];
+  /** every wish that counts in the line's score with its rank weight (a unit: both members' wishes) */
+  weighted: readonly { wish: Wish; weight: number }[];
+  /** the line's score before wishes: the base value B, once per member */
+  baseValue: number;
+  /** pairing indices this crew member may fly, by report time (a unit: those both may fly that need two or more of the position) */
   eligible: number[];
   /** by pairing index: its position in `eligible`, −1 when not eligible */
   position: Int32Array;
@@ -78,6 +94,26 @@ export interface AwardProblem {
  * (AWARD-MODEL.md's W_i = 1 + β(n − i)/n with i counted from 1) — times the
  * crew member's carried fairness weight.
  */
+/** One crew member alone as a bidder (its `rank` is set once the group's order stands). */
+function single(member: CrewMember, wishes: readonly Wish[], weight: number, eligible: number[], P: number, maxWorkedDays: number, instance: Instance): CrewProblem {
+  const position = new Int32Array(P).fill(-1);
+  eligible.forEach((k, j) => (position[k] = j));
+  const { rankDecay, baseLineValue } = instance.settings;
+  return {
+    crew: member,
+    members: [member],
+    memberWishes: [wishes],
+    rank: -1,
+    weight,
+    memberWeights: [weight],
+    weighted: wishes.map((wish, r) => ({ wish, weight: rankWeight(r, rankDecay) })),
+    baseValue: baseLineValue,
+    eligible,
+    position,
+    maxWorkedDays,
+  };
+}
+
 export function seniorityWeight(rank: number, n: number, beta: number, carriedWeight: number): number {
   return (1 + (beta * (n - 1 - rank)) / n) * carriedWeight;
 }
@@ -145,7 +181,7 @@ export function prepareProblem(instance: Instance): AwardProblem {
   const tails = monotoneTails(order.filter((k) => need[k]! > 0), next, P);
   const sorted = [...instance.crew].sort((a, b) => a.seniority - b.seniority);
   const n = sorted.length;
-  const crew = sorted.map((member, rank): CrewProblem => {
+  const singles = sorted.map((member, rank): CrewProblem => {
     const fresh = start(member, ruleSet, engine);
     const eligible = order.filter((k) => {
       if (need[k]! <= 0 || illegalAt.has(k)) return false;
@@ -155,19 +191,82 @@ export function prepareProblem(instance: Instance): AwardProblem {
       // Legal on its own for this crew member: history, carry-in and fixed activities.
       return extendAll(fresh, { kind: "pairing", pairing: p }).violations.length === 0;
     });
-    const position = new Int32Array(P).fill(-1);
-    eligible.forEach((k, j) => (position[k] = j));
-    return {
-      crew: member,
-      rank,
-      weight: seniorityWeight(rank, n, settings.seniorityWeight, member.carriedWeight),
-      wishes: instance.bids[member.id] ?? [],
-      eligible,
-      position,
-      maxWorkedDays,
-    };
+    const weight = seniorityWeight(rank, n, settings.seniorityWeight, member.carriedWeight);
+    return single(member, instance.bids[member.id] ?? [], weight, eligible, P, maxWorkedDays, instance);
   });
+  const crew = buddyUnits(singles, need, { pairings, ruleSet, engine, minCreditMinutes, seniorityBeta: settings.seniorityWeight, instance });
+  crew.forEach((c, rank) => (c.rank = rank));
   return { instance, pairings, need, startMs, endMs, periodDays, dutyDays, next, ...(tails ? { tails } : {}), engine, score, crew, illegal, maxCreditMinutes, maxDaysOn, minCreditMinutes, periodLength };
+}
+
+/**
+ * The bidders of the group in seniority order, buddy units in place of their
+ * members. Two crew members form a unit when each one's bid names the other in
+ * a buddy wish, some pairing needs two or more of the group's position and
+ * both may fly it, and a shared line is legal for both: some first fit of the
+ * shared trips (sharedLineExists) must pass both members' line rules (a quick screen, not a search:
+ * a pair it refuses bids as two crew members, each buddy wish then scoring 0,
+ * as it does for a pair that may share no trip). The unit takes the junior's
+ * place in seniority order; its weight is both members' weights there.
+ */
+function buddyUnits(
+  singles: CrewProblem[],
+  need: readonly number[],
+  ctx: { pairings: readonly Pairing[]; ruleSet: Instance["ruleSet"]; engine: EngineContext; minCreditMinutes: number; seniorityBeta: number; instance: Instance },
+): CrewProblem[] {
+  const byId = new Map(singles.map((c, i) => [c.crew.id, i]));
+  const buddyOf = (c: CrewProblem) => c.memberWishes[0]!.find((w) => w.kind === "buddy")?.crewId;
+  const joined = new Map<number, CrewProblem>(); // junior's index → unit
+  const taken = new Set<number>();
+  const n = singles.length;
+  singles.forEach((a, i) => {
+    const j = byId.get(buddyOf(a) ?? "");
+    if (j === undefined || j <= i || buddyOf(singles[j]!) !== a.crew.id) return;
+    const b = singles[j]!;
+    const eligible = a.eligible.filter((k) => need[k]! >= 2 && b.position[k]! >= 0);
+    if (eligible.length === 0 || !sharedLineExists([a.crew, b.crew], eligible, ctx)) return;
+    const unit = single(b.crew, b.memberWishes[0]!, 0, eligible, need.length, Math.min(a.maxWorkedDays, b.maxWorkedDays), ctx.instance);
+    const memberWeights = [a, b].map((m) => seniorityWeight(j, n, ctx.seniorityBeta, m.crew.carriedWeight));
+    const weight = memberWeights[0]! + memberWeights[1]!;
+    const { rankDecay, baseLineValue } = ctx.instance.settings;
+    joined.set(j, {
+      ...unit,
+      members: [a.crew, b.crew],
+      memberWishes: [a.memberWishes[0]!, b.memberWishes[0]!],
+      weight,
+      memberWeights,
+      weighted: [a, b].flatMap((m) => m.memberWishes[0]!.map((wish, r) => ({ wish, weight: rankWeight(r, rankDecay) }))),
+      baseValue: 2 * baseLineValue,
+    });
+    taken.add(i);
+  });
+  return singles.flatMap((c, i) => (taken.has(i) ? [] : [joined.get(i) ?? c]));
+}
+
+/**
+ * Whether a first fit of `eligible` (see buddyUnits) is a legal line for every
+ * member: from each shared trip in turn, the trips from there on in report
+ * order, taken while legal for both, until the credit minimum is reached.
+ */
+function sharedLineExists(
+  members: readonly CrewMember[],
+  eligible: readonly number[],
+  ctx: { pairings: readonly Pairing[]; ruleSet: Instance["ruleSet"]; engine: EngineContext; minCreditMinutes: number },
+): boolean {
+  const fresh = members.map((m) => start(m, ctx.ruleSet, ctx.engine));
+  return eligible.some((_, from) => {
+    let states = fresh;
+    let credit = 0;
+    for (const k of eligible.slice(from)) {
+      if (credit >= ctx.minCreditMinutes && credit > 0) break;
+      const item = { kind: "pairing" as const, pairing: ctx.pairings[k]! };
+      const next = states.map((s) => extendAll(s, item));
+      if (next.some((r) => r.violations.length)) continue;
+      states = next.map((r) => r.state);
+      credit += ctx.pairings[k]!.creditMinutes;
+    }
+    return credit > 0 && states.every((s) => finish(s).legal);
+  });
 }
 
 /** The ranks behind AwardProblem.tails, or undefined when some pairing's successors are not a tail of report order. */
@@ -196,13 +295,25 @@ export function successorPositions(problem: AwardProblem, c: CrewProblem, j: num
   return out;
 }
 
-/** The score of a line-holder line of pairing indices for crew member `c` (lineScore, the one contract). */
+/**
+ * The score of a line-holder line of pairing indices for crew member `c`
+ * (lineScore, the one contract); for a buddy unit, the sum of both members'
+ * scores, each with the shared line as the buddy's line.
+ */
 export function scoreLine(problem: AwardProblem, c: CrewProblem, line: readonly number[]): number {
-  return lineScore(c.wishes, line.map((k) => problem.pairings[k]!), problem.score, problem.instance.settings);
+  const trips = line.map((k) => problem.pairings[k]!);
+  return memberScores(problem, c, trips).reduce((t, x) => t + x, 0);
 }
 
-/** The legality engine's verdict on a line (or, with `reserve`, the reserve line). */
+/** Each member's score of a shared line (a crew member alone: their own score). */
+export function memberScores(problem: AwardProblem, c: CrewProblem, trips: readonly Pairing[]): number[] {
+  const context: ScoreContext = c.members.length > 1 ? { ...problem.score, buddyLine: trips.map((p) => p.id) } : problem.score;
+  return c.memberWishes.map((wishes) => lineScore(wishes, trips, context, problem.instance.settings));
+}
+
+/** The legality engine's verdict on a line (or, with `reserve`, the reserve line); for a unit, legal only when legal for both. */
 export function checkCrewLine(problem: AwardProblem, c: CrewProblem, line: readonly number[], reserve = false): LineResult {
   const items = line.map((k) => ({ kind: "pairing" as const, pairing: problem.pairings[k]! }));
-  return checkLine(c.crew, problem.instance.ruleSet, items, problem.engine, { reserve });
+  const results = c.members.map((m) => checkLine(m, problem.instance.ruleSet, items, problem.engine, { reserve }));
+  return results.find((r) => !r.legal) ?? results[0]!;
 }

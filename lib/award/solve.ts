@@ -28,14 +28,13 @@
  */
 import type { Instance, Stats } from "../domain/index.ts";
 import { AppError } from "../domain/index.ts";
-import { assembleAward, type Assembled, type Choice } from "./assemble.ts";
+import { assembleAward, crewFigures, type Assembled, type Choice } from "./assemble.ts";
 import { firstFitChoices, greedyChoices } from "./greedy.ts";
 import { loadHighs, Master, type MasterColumn, type SolveOutcome } from "./master.ts";
-import { prepareProblem, scoreLine, type AwardProblem } from "./problem.ts";
+import { checkCrewLine, prepareProblem, scoreLine, type AwardProblem } from "./problem.ts";
 import { BEST_LINE_NODES, bestScores, priceLines } from "./pricing.ts";
 import { improveByNeighbourhoods } from "./improve.ts";
 import { compactMipAward, compactStrictAward } from "./compact-mip.ts";
-import { checkLine } from "../rules/index.ts";
 
 export type AwardPhase = "prepare" | "coverage" | "wishes" | "integer" | "done";
 
@@ -122,6 +121,11 @@ export interface StrictCertificate {
   bound: number | null;
   /** "coverage" and "enumeration": the least open time (credit minutes and a share per position) of any award giving them more */
   openAbove?: number;
+  /**
+   * A buddy unit's step (both members carry it): the crew ids of its members, senior first; `score`
+   * and `bound` are then of the unit's score, the sum of both members' scores of the shared line
+   */
+  unit?: string[];
 }
 
 const countSteps = (certificates: readonly StrictCertificate[]) => {
@@ -240,14 +244,17 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
   });
   const totalPositions = [...need.values()].reduce((t, d) => t + d, 0);
   const openCost = new Map([...need.keys()].map((k) => [k, problem.pairings[k]!.creditMinutes + 1 / (1 + totalPositions)]));
-  const noLine = best.filter((b) => b <= 0).length;
+  // Reserve lines count crew members (a buddy unit holding reserve holds two).
+  const sizes = problem.crew.map((c) => c.members.length);
+  const members = sizes.reduce((t, x) => t + x, 0);
+  const noLine = best.reduce((t, b, i) => t + (b <= 0 ? sizes[i]! : 0), 0);
   const { min: reserveMin, max: reserveMaxSetting } = settings.reserve;
-  let reserveMax = reserveMaxSetting ?? n;
+  let reserveMax = reserveMaxSetting ?? members;
   if (noLine > reserveMax) {
     warnings.push(`${noLine} crew have no legal line, more than the reserve maximum ${reserveMax}: they hold reserve anyway`);
     reserveMax = noLine;
   }
-  const master = new Master(highs, n, need, { min: reserveMin, max: reserveMax });
+  const master = new Master(highs, n, need, { min: reserveMin, max: reserveMax }, sizes);
   try {
     // Phase 1 values a line at tieBreak × its phase-2 value: integer coverage
     // values differ by at least δ = 1/(1 + positions) minutes (credit is whole
@@ -299,9 +306,10 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       const options = { timeLimitSeconds: seconds, shouldStop: cancelled };
       const compact = strict ? await compactStrictAward(instance, options) : await compactMipAward(instance, options);
       clock.times.compact = performance.now() - started;
+      // (A buddy unit's line is its junior member's: crew.id.)
       const crewIndex = new Map(problem.crew.map((c, i) => [c.crew.id, i]));
       const pairingIndex = new Map(problem.pairings.map((p, k) => [p.id, k]));
-      compactColumns = compact.award.lines.map((line): MasterColumn => {
+      compactColumns = compact.award.lines.filter((line) => crewIndex.has(line.crewId)).map((line): MasterColumn => {
         const i = crewIndex.get(line.crewId)!;
         const pairings = line.pairings.map((id) => pairingIndex.get(id)!).sort((a, b) => problem.startMs[a]! - problem.startMs[b]! || a - b);
         return line.kind === "reserve" ? { crew: i, pairings: [], reserve: true, score: 0 } : { crew: i, pairings, reserve: false, score: scoreLine(problem, problem.crew[i]!, pairings) };
@@ -356,8 +364,9 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         // open time is 0 and cannot fall further: the integer solve takes over (an award that then
         // leaves nothing open is proven optimal for coverage without more pricing).
         if (phase === "coverage" && lp.objective >= -0.5 / (1 + totalPositions)) return result(lp, false);
-        // A strict probe whose LP keeps the coverage cannot prove anything by more pricing: the integer solve decides.
-        if (phase === "probe" && lp.objective >= -coverageLimit) return result(lp, false);
+        // A strict probe whose LP keeps the coverage cannot prove anything by more pricing: the integer solve
+        // decides — unless it failed to keep the coverage on the lines so far (probeAbove's second try).
+        if (phase === "probe" && !probePricesOut && lp.objective >= -coverageLimit) return result(lp, false);
         const centre = bounded?.y;
         const at: Float64Array = mode === "smooth" && centre ? centre.map((v, r) => SMOOTHING * v + (1 - SMOOTHING) * y[r]!) : y;
         const cost = pairingCosts(at);
@@ -386,7 +395,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
             const offsetNow = lineOffset(i, y);
             for (const l of r.lines) {
               let profit = weight * l.score - yi + offsetNow;
-              for (const k of l.pairings) profit -= current[k]!;
+              for (const k of l.pairings) profit -= sizes[i]! * current[k]!; // (a buddy unit fills two positions)
               if (profit <= TOL) continue;
               if (addColumn({ crew: i, pairings: l.pairings, reserve: false, score: l.score })) added++;
               // A line the master holds already but pricing values higher (a score above an unproven best
@@ -464,7 +473,8 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       let proven = false;
       if (mip.status === "infeasible") return { mip, proven: false, chosen: [...(start ?? greedyColumns)] };
       if (mip.status !== "optimal" && mip.status !== "target") noteStop();
-      if (mip.status === "optimal" && bound - mip.objective <= 1e-7 * Math.max(1, Math.abs(bound))) proven = true;
+      // (An infinite bound proves nothing: Infinity − z ≤ 1e-7·Infinity would hold.)
+      if (mip.status === "optimal" && Number.isFinite(bound) && bound - mip.objective <= 1e-7 * Math.max(1, Math.abs(bound))) proven = true;
       else if (exhausted && bounded && mip.status === "optimal") {
         const gapAbs = bounded.value - mip.objective;
         const { y, line } = bounded;
@@ -500,16 +510,18 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
     /** Positions each pairing still needs under a full solution (negative: over-covered). */
     const openAfter = (cols: readonly MasterColumn[]) => {
       const left = new Map(need);
-      for (const col of cols) for (const p of col.pairings) left.set(p, left.get(p)! - 1);
+      for (const col of cols) for (const p of col.pairings) left.set(p, left.get(p)! - sizes[col.crew]!);
       return left;
     };
     const coverageOf = (cols: readonly MasterColumn[]) => [...openAfter(cols)].reduce((t, [p, open]) => t + openCost.get(p)! * open, 0);
     let coverageLimit = Infinity;
+    /** a strict probe's second try: price to the LP optimum, so that the integer solve's gap can be closed */
+    let probePricesOut = false;
     /** One line per crew member, no trip over-covered, reserve within bounds, coverage kept. */
     const feasible = (cols: readonly MasterColumn[]) => {
       if (cols.length !== n || new Set(cols.map((col) => col.crew)).size !== n) return false;
       if ([...openAfter(cols).values()].some((open) => open < 0)) return false;
-      const reserves = cols.filter((col) => col.reserve).length;
+      const reserves = cols.reduce((t, col) => t + (col.reserve ? sizes[col.crew]! : 0), 0);
       if (cols.some((col) => settled[col.crew] !== undefined && (col.reserve ? 0 : col.score) < settled[col.crew]! - FLOOR_MARGIN - 1e-9)) return false;
       // (A strict probe asks whether the coverage can be kept: its solutions are weighed by value, not refused here.)
       return reserves >= reserveMin && reserves <= reserveMax && (phase === "probe" || coverageOf(cols) <= coverageLimit);
@@ -633,7 +645,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         });
         if (!pick) return undefined;
         const taken = new Set(pick.pairings);
-        let reserves = award.filter((col) => col.reserve && col.crew !== k).length;
+        let reserves = award.reduce((t, col) => t + (col.reserve && col.crew !== k ? sizes[col.crew]! : 0), 0);
         const out: MasterColumn[] = [];
         for (const col of award) {
           if (col.crew === k) {
@@ -645,11 +657,11 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
             continue;
           }
           if (settled[col.crew] !== undefined) return undefined;
-          if (reserves < reserveMax) {
+          if (reserves + sizes[col.crew]! <= reserveMax) {
             const reserve = master.columns.find((c) => c.crew === col.crew && c.reserve);
             if (!reserve) return undefined;
             out.push(reserve);
-            reserves++;
+            reserves += sizes[col.crew]!;
             continue;
           }
           return undefined;
@@ -660,15 +672,16 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
        * Crew member i's version of a line (a reserve line, or these pairings) when lib/rules
        * calls it legal for i as a whole line, scored by lineScore; undefined otherwise.
        */
-      const lineFor = (i: number, col: MasterColumn): MasterColumn | undefined => {
+      const lineFor = (i: number, col: MasterColumn, above = -Infinity): MasterColumn | undefined => {
         const c = problem.crew[i]!;
-        if (col.reserve) {
-          return checkLine(c.crew, instance.ruleSet, [], problem.engine, { reserve: true }).legal ? { crew: i, pairings: [], reserve: true, score: 0 } : undefined;
-        }
+        // (A buddy unit's line fills two positions of each trip: it trades lines with another unit only.)
+        if (sizes[i] !== sizes[col.crew]) return undefined;
+        if (col.reserve) return above < 0 && checkCrewLine(problem, c, [], true).legal ? { crew: i, pairings: [], reserve: true, score: 0 } : undefined;
         if (col.pairings.some((p) => c.position[p]! < 0)) return undefined;
-        const items = col.pairings.map((p) => ({ kind: "pairing" as const, pairing: problem.pairings[p]! }));
-        if (!checkLine(c.crew, instance.ruleSet, items, problem.engine).legal) return undefined;
-        return { crew: i, pairings: col.pairings, reserve: false, score: scoreLine(problem, c, col.pairings) };
+        // Scored before the legality check, which costs far more (the final swap passes ask it O(n²) times).
+        const score = scoreLine(problem, c, col.pairings);
+        if (score <= above || !checkCrewLine(problem, c, col.pairings).legal) return undefined;
+        return { crew: i, pairings: col.pairings, reserve: false, score };
       };
       /**
        * Swaps that raise crew member i's score: i takes a more junior colleague's line
@@ -683,8 +696,9 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
           let bestSwap: [MasterColumn, MasterColumn, number] | undefined;
           for (let j = i + 1; j < n; j++) {
             if (Master.key({ ...award[j]!, crew: i }) === Master.key(award[i]!)) continue;
-            const taken = lineFor(i, award[j]!);
-            if (!taken || taken.reserve || taken.score <= mine + SCORE_TOL || (bestSwap && taken.score <= bestSwap[0].score)) continue;
+            if (award[j]!.reserve) continue;
+            const taken = lineFor(i, award[j]!, Math.max(mine + SCORE_TOL, bestSwap?.[0].score ?? -Infinity));
+            if (!taken) continue;
             const given = lineFor(j, award[i]!);
             if (given) bestSwap = [taken, given, j];
           }
@@ -712,20 +726,28 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         master.setCrewCosts(k, () => 0);
         master.probeCoverage(openCost, coverageLimit);
         try {
-          const step = generate(from, from + 50 / n);
-          if (step.lp.status === "infeasible") return { kind: "impossible", method: "reserve-minimum", openAbove: Infinity };
-          // −bound is a lower bound on open time (in openCost's units) for every award giving k `target`.
-          if (-step.bound > coverageLimit + COVERAGE_TOL) return { kind: "impossible", method: "coverage", openAbove: -step.bound };
-          if (stop()) return { kind: "undecided" };
-          const solved = integer(step.bound, step.bounded, step.exhausted, probeStart(k, incumbentNow), { value: -coverageLimit, share: 0.5 });
-          const keeps = solved.mip.status !== "infeasible" && solved.mip.status !== "other";
-          const byCrew = solved.chosen.find((col) => col.crew === k);
-          if (keeps && feasible(solved.chosen) && coverageOf(solved.chosen) <= coverageLimit && byCrew && !byCrew.reserve && byCrew.score >= target) {
-            return { kind: "better", chosen: solved.chosen };
+          // First on the lines the LP needs to keep the coverage; when the integer solve on them cannot, once
+          // more with pricing to the LP's optimum, so that the gap to its bound can be closed (the first try's
+          // integer optimum over the lines so far proves nothing: a line not yet generated may keep the coverage).
+          for (let attempt = 0; attempt < 2; attempt++) {
+            probePricesOut = attempt === 1;
+            const step = generate(from, from + 50 / n);
+            if (step.lp.status === "infeasible") return { kind: "impossible", method: "reserve-minimum", openAbove: Infinity };
+            // −bound is a lower bound on open time (in openCost's units) for every award giving k `target`.
+            if (-step.bound > coverageLimit + COVERAGE_TOL) return { kind: "impossible", method: "coverage", openAbove: -step.bound };
+            if (stop()) return { kind: "undecided" };
+            const solved = integer(step.bound, step.bounded, step.exhausted, probeStart(k, incumbentNow), { value: -coverageLimit, share: 0.5 });
+            const keeps = solved.mip.status !== "infeasible" && solved.mip.status !== "other";
+            const byCrew = solved.chosen.find((col) => col.crew === k);
+            if (keeps && feasible(solved.chosen) && coverageOf(solved.chosen) <= coverageLimit && byCrew && !byCrew.reserve && byCrew.score >= target) {
+              return { kind: "better", chosen: solved.chosen };
+            }
+            if (solved.proven && -solved.mip.objective > coverageLimit + COVERAGE_TOL) return { kind: "impossible", method: "enumeration", openAbove: -solved.mip.objective };
+            if (stop() || step.exhausted) break;
           }
-          if (solved.proven && -solved.mip.objective > coverageLimit + COVERAGE_TOL) return { kind: "impossible", method: "enumeration", openAbove: -solved.mip.objective };
           return { kind: "undecided" };
         } finally {
+          probePricesOut = false;
           master.probeCoverage(undefined, coverageLimit);
           master.release(k);
           phase = "strict";
@@ -857,7 +879,11 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
       return { reserve: col.reserve, pairings: col.pairings };
     });
     const assembled = clock.phase("assemble", () => assembleAward(problem, choices, best));
-    strictResult?.certificates.forEach((cert, i) => (assembled.award.lines[i]!.certificate = { ...cert }));
+    strictResult?.certificates.forEach((cert, i) => {
+      const { members } = problem.crew[i]!;
+      const unit = members.length > 1 ? { unit: members.map((m) => m.id) } : {};
+      assembled.entryLines[i]!.forEach((x) => (assembled.award.lines[x]!.certificate = { ...cert, ...unit }));
+    });
     const fairnessShortfalls =
       floor === undefined
         ? []
@@ -910,8 +936,7 @@ export async function solveAward(instance: Instance, options: AwardOptions = {})
         neighbourhoods: { coverage: coverNeighbourhoods, wishes: neighbourhoods },
         illegalPairings: problem.illegal,
         fairnessShortfalls,
-        best: Object.fromEntries(problem.crew.map((c, i) => [c.crew.id, best[i]!])),
-        weights: Object.fromEntries(problem.crew.map((c) => [c.crew.id, c.weight])),
+        ...crewFigures(problem, best),
         warnings,
         ...(atBest || strict ? {} : { finalDuals }),
       },

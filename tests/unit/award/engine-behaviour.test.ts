@@ -37,7 +37,7 @@ describe("the pricing search", () => {
           credit += problem.pairings[c.eligible[j]!]!.creditMinutes;
         }
         const { ahead, here } = wishBounds(problem, c, prefix, days, credit, from);
-        const score = (js: number[]) => lineScore(c.wishes, js.map((j) => problem.pairings[c.eligible[j]!]!), problem.score, instance.settings);
+        const score = (js: number[]) => lineScore(c.memberWishes[0]!, js.map((j) => problem.pairings[c.eligible[j]!]!), problem.score, instance.settings);
         expect(ahead).toBeGreaterThanOrEqual(score([...prefix, ...extension]) - 1e-12);
         expect(here).toBeGreaterThanOrEqual(score(prefix) - 1e-12);
       }),
