@@ -1,6 +1,7 @@
 /**
  * The strict-seniority audits of AWARD-MODEL.md on any award, with legality
- * re-checked by lib/rules' checkLine on whole lines and scores by lib/domain's
+ * re-checked by lib/rules' checkLine on whole lines (and the pairings'
+ * required qualifications) and scores by lib/domain's
  * lineScore (the one scoring contract) — no code of lib/award:
  *
  * - swap: no senior would score higher with a junior's line that is legal for
@@ -29,9 +30,13 @@ export function strictAudits(instance: Instance, award: Award, tolerance = 1e-6)
   const lines = [...award.lines].sort((a, b) => members.get(a.crewId)!.seniority - members.get(b.crewId)!.seniority);
   const held = lines.map((l) => (l.kind === "reserve" ? undefined : l.pairings.map((id) => byId.get(id)!)));
   const who = lines.map((l) => members.get(l.crewId)!);
+  // A line is legal for a crew member when they hold every qualification its pairings require
+  // (pairing.requires, lib/domain/pairing.ts — a domain fact checkLine does not look at) and
+  // checkLine calls it legal.
+  const qualified = (member: CrewMember, line: readonly Pairing[]) => line.every((p) => p.requires.every((q) => member.qualifications.includes(q)));
   const legal = (member: CrewMember, line: readonly Pairing[] | undefined) =>
     line
-      ? checkLine(member, ruleSet, line.map((pairing) => ({ kind: "pairing" as const, pairing })), engine).legal
+      ? qualified(member, line) && checkLine(member, ruleSet, line.map((pairing) => ({ kind: "pairing" as const, pairing })), engine).legal
       : checkLine(member, ruleSet, [], engine, { reserve: true }).legal;
   const scoreOf = (member: CrewMember, line: readonly Pairing[] | undefined) =>
     line ? lineScore(instance.bids[member.id] ?? [], line, score, settings) : 0;
