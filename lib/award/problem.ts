@@ -88,12 +88,6 @@ export interface AwardProblem {
   periodLength: number;
 }
 
-/**
- * The seniority weight of the crew member of 0-based rank `rank` among `n`:
- * 1 + β(n − 1 − rank)/n — the most senior gets 1 + β(n − 1)/n, the most junior 1
- * (AWARD-MODEL.md's W_i = 1 + β(n − i)/n with i counted from 1) — times the
- * crew member's carried fairness weight.
- */
 /** One crew member alone as a bidder (its `rank` is set once the group's order stands). */
 function single(member: CrewMember, wishes: readonly Wish[], weight: number, eligible: number[], P: number, maxWorkedDays: number, instance: Instance): CrewProblem {
   const position = new Int32Array(P).fill(-1);
@@ -114,6 +108,12 @@ function single(member: CrewMember, wishes: readonly Wish[], weight: number, eli
   };
 }
 
+/**
+ * The seniority weight of the crew member of 0-based rank `rank` among `n`:
+ * 1 + β(n − 1 − rank)/n — the most senior gets 1 + β(n − 1)/n, the most junior 1
+ * (AWARD-MODEL.md's W_i = 1 + β(n − i)/n with i counted from 1) — times the
+ * crew member's carried fairness weight.
+ */
 export function seniorityWeight(rank: number, n: number, beta: number, carriedWeight: number): number {
   return (1 + (beta * (n - 1 - rank)) / n) * carriedWeight;
 }
@@ -194,7 +194,7 @@ export function prepareProblem(instance: Instance): AwardProblem {
     const weight = seniorityWeight(rank, n, settings.seniorityWeight, member.carriedWeight);
     return single(member, instance.bids[member.id] ?? [], weight, eligible, P, maxWorkedDays, instance);
   });
-  const crew = buddyUnits(singles, need, { pairings, ruleSet, engine, minCreditMinutes, seniorityBeta: settings.seniorityWeight, instance });
+  const crew = buddyUnits(singles, need, { pairings, ruleSet, engine, minCreditMinutes, instance });
   crew.forEach((c, rank) => (c.rank = rank));
   return { instance, pairings, need, startMs, endMs, periodDays, dutyDays, next, ...(tails ? { tails } : {}), engine, score, crew, illegal, maxCreditMinutes, maxDaysOn, minCreditMinutes, periodLength };
 }
@@ -204,15 +204,15 @@ export function prepareProblem(instance: Instance): AwardProblem {
  * members. Two crew members form a unit when each one's bid names the other in
  * a buddy wish, some pairing needs two or more of the group's position and
  * both may fly it, and a shared line is legal for both: some first fit of the
- * shared trips (sharedLineExists) must pass both members' line rules (a quick screen, not a search:
- * a pair it refuses bids as two crew members, each buddy wish then scoring 0,
- * as it does for a pair that may share no trip). The unit takes the junior's
+ * shared trips (sharedLineExists) must pass both members' line rules. That is
+ * a quick screen, not a search: a pair it refuses bids as two crew members,
+ * each buddy wish then scoring 0, as for a pair that may share no trip. The unit takes the junior's
  * place in seniority order; its weight is both members' weights there.
  */
 function buddyUnits(
   singles: CrewProblem[],
   need: readonly number[],
-  ctx: { pairings: readonly Pairing[]; ruleSet: Instance["ruleSet"]; engine: EngineContext; minCreditMinutes: number; seniorityBeta: number; instance: Instance },
+  ctx: { pairings: readonly Pairing[]; ruleSet: Instance["ruleSet"]; engine: EngineContext; minCreditMinutes: number; instance: Instance },
 ): CrewProblem[] {
   const byId = new Map(singles.map((c, i) => [c.crew.id, i]));
   const buddyOf = (c: CrewProblem) => c.memberWishes[0]!.find((w) => w.kind === "buddy")?.crewId;
@@ -226,17 +226,16 @@ function buddyUnits(
     const eligible = a.eligible.filter((k) => need[k]! >= 2 && b.position[k]! >= 0);
     if (eligible.length === 0 || !sharedLineExists([a.crew, b.crew], eligible, ctx)) return;
     const unit = single(b.crew, b.memberWishes[0]!, 0, eligible, need.length, Math.min(a.maxWorkedDays, b.maxWorkedDays), ctx.instance);
-    const memberWeights = [a, b].map((m) => seniorityWeight(j, n, ctx.seniorityBeta, m.crew.carriedWeight));
+    const memberWeights = [a, b].map((m) => seniorityWeight(j, n, ctx.instance.settings.seniorityWeight, m.crew.carriedWeight));
     const weight = memberWeights[0]! + memberWeights[1]!;
-    const { rankDecay, baseLineValue } = ctx.instance.settings;
     joined.set(j, {
       ...unit,
       members: [a.crew, b.crew],
       memberWishes: [a.memberWishes[0]!, b.memberWishes[0]!],
       weight,
       memberWeights,
-      weighted: [a, b].flatMap((m) => m.memberWishes[0]!.map((wish, r) => ({ wish, weight: rankWeight(r, rankDecay) }))),
-      baseValue: 2 * baseLineValue,
+      weighted: [...a.weighted, ...b.weighted],
+      baseValue: a.baseValue + b.baseValue,
     });
     taken.add(i);
   });
