@@ -1,22 +1,192 @@
-/** Award runs as the worker sees them: claim, progress, finish. */
+/**
+ * Award runs: requested by a scheduler, claimed and worked by the award worker
+ * (lib/jobs/award-worker.ts), finished with their results. The run row is the
+ * source of truth; the pg-boss job only carries its id.
+ *
+ * - A run keeps its instance snapshot (the period export of its award group
+ *   when it was requested), the SHA-256 of that snapshot's RFC 8785 canonical
+ *   JSON, its settings, its progress, and then its award and solver statistics.
+ * - A worker claims a run with a lease and renews it while it works. A job
+ *   retried after its worker died (pg-boss expires the job) may take the run
+ *   over once the lease has lapsed; a live worker's run is never taken.
+ * - Results are written in one transaction, and only by the worker that holds
+ *   the run: a run cancelled meanwhile stays cancelled, and no other run or
+ *   published award is touched.
+ */
+import type PgBoss from "pg-boss";
+import { AppError, awardSchema, instanceSchema, sha256Hex, type Instance } from "../domain/index";
+import type { AwardResult, Progress } from "../award/index";
+import { AWARD_QUEUE, type AwardJob } from "../jobs/queue";
+import type { Prisma } from "./generated/client";
 import { db } from "./client";
 
-/**
- * Moves a queued run to running and returns true, or returns false when the
- * run is missing or already taken: the run row is the lock, so a retried job
- * (pg-boss may retry beside a slow original) never runs twice.
- */
-export async function claimRun(runId: string): Promise<boolean> {
-  const { count } = await db().awardRun.updateMany({
-    where: { id: runId, state: "queued" },
-    data: { state: "running", startedAt: new Date(), progress: { phase: "starting", fraction: 0 } },
-  });
-  return count === 1;
+/** A document as Prisma stores JSON: plain data, with non-finite numbers (an unproven bound's Infinity) as null. */
+const json = (value: unknown): Prisma.InputJsonValue =>
+  JSON.parse(JSON.stringify(value, (_key, v: unknown) => (typeof v === "number" && !Number.isFinite(v) ? null : v))) as Prisma.InputJsonValue;
+import { exportPeriod } from "./period-export";
+
+/** How long a claim holds without renewal (the worker renews it every few seconds). */
+export const LEASE_SECONDS = 30;
+/** The queue job outlives the run's own time limit by this much before pg-boss retries it elsewhere. */
+export const EXPIRY_MARGIN_SECONDS = 120;
+
+/** What the run page shows while the worker works: phase, percent of the run, message, time so far. */
+export interface RunProgress {
+  phase: Progress["phase"] | "queued" | "starting";
+  percent: number;
+  message: string;
+  elapsedMs: number;
 }
 
-export async function failRun(runId: string, message: string): Promise<void> {
-  await db().awardRun.update({
-    where: { id: runId },
-    data: { state: "failed", error: message, finishedAt: new Date() },
+/**
+ * Queues a run of award group `groupId` on the period as it stands: its
+ * instance is exported now (the bids are each crew member's last submitted
+ * version), hashed and stored with the run, and one job goes on the queue.
+ */
+export async function requestRun(
+  boss: PgBoss,
+  input: { groupId: string; requestedById?: string | null; /** seconds the job outlives the time limit (tests shorten it) */ expiryMarginSeconds?: number },
+): Promise<{ runId: string; instanceHash: string }> {
+  const group = await db().awardGroup.findUnique({ where: { id: input.groupId }, select: { id: true, bidPeriodId: true, position: true } });
+  if (!group) throw new AppError("not_found", `no award group ${input.groupId}`);
+  const bundle = await exportPeriod(db(), group.bidPeriodId);
+  const instance = bundle.instances.find((i) => i.group.position === group.position);
+  if (!instance) throw new AppError("internal", `the export of period ${group.bidPeriodId} has no instance for ${group.position}`);
+  const instanceHash = sha256Hex(instance);
+  const run = await db().awardRun.create({
+    data: {
+      awardGroupId: group.id,
+      settings: json(instance.settings),
+      instance: json(instance),
+      instanceHash,
+      requestedById: input.requestedById ?? null,
+      progress: { phase: "queued", percent: 0, message: "Waiting for a worker", elapsedMs: 0 } satisfies RunProgress,
+    },
   });
+  const expireInSeconds = Math.ceil(instance.settings.timeLimitSeconds) + (input.expiryMarginSeconds ?? EXPIRY_MARGIN_SECONDS);
+  const jobId = await boss.send(AWARD_QUEUE, { runId: run.id } satisfies AwardJob, { expireInSeconds, retryLimit: 2, retryDelay: 1 });
+  if (!jobId) {
+    await failRun(run.id, "the award queue refused the job");
+    throw new AppError("internal", "the award queue refused the job");
+  }
+  await db().awardRun.update({ where: { id: run.id }, data: { jobId } });
+  return { runId: run.id, instanceHash };
+}
+
+/** What a claim found: the run's instance, now this worker's; a run finished or gone; a run a live worker holds. */
+export type Claim = { kind: "claimed"; instance: Instance } | { kind: "gone" } | { kind: "held"; leaseUntil: Date };
+
+/**
+ * Takes a run for this worker. The run row is the lock, so a retried job
+ * (pg-boss may retry beside a slow original) never runs a run twice at once:
+ * a queued run is taken, and so is a running one whose lease has lapsed (its
+ * worker died); a run held by a live worker is "held"; a finished, cancelled
+ * or missing run is "gone".
+ */
+export async function claimRun(runId: string, now = new Date()): Promise<Claim> {
+  const leaseUntil = new Date(now.getTime() + LEASE_SECONDS * 1000);
+  const { count } = await db().awardRun.updateMany({
+    where: { id: runId, OR: [{ state: "queued" }, { state: "running", leaseUntil: { lt: now } }] },
+    data: {
+      state: "running",
+      startedAt: now,
+      leaseUntil,
+      progress: { phase: "starting", percent: 0, message: "Starting", elapsedMs: 0 } satisfies RunProgress,
+    },
+  });
+  const run = await db().awardRun.findUnique({ where: { id: runId }, select: { instance: true, state: true, leaseUntil: true } });
+  if (count === 1 && run) return { kind: "claimed", instance: instanceSchema.parse(run.instance) };
+  if (run?.state === "running" && run.leaseUntil) return { kind: "held", leaseUntil: run.leaseUntil };
+  return { kind: "gone" };
+}
+
+/**
+ * Stores progress (when given) and renews the lease. Returns whether the run
+ * should stop: cancel was asked for, or the run is no longer this worker's.
+ */
+export async function heartbeat(runId: string, progress?: RunProgress, now = new Date()): Promise<{ stop: boolean }> {
+  const { count } = await db().awardRun.updateMany({
+    where: { id: runId, state: "running" },
+    data: { leaseUntil: new Date(now.getTime() + LEASE_SECONDS * 1000), ...(progress ? { progress: { ...progress } } : {}) },
+  });
+  if (count !== 1) return { stop: true };
+  const run = await db().awardRun.findUniqueOrThrow({ where: { id: runId }, select: { cancelRequestedAt: true } });
+  return { stop: run.cancelRequestedAt !== null };
+}
+
+/**
+ * Writes a run's results in one transaction: the award document, the solver
+ * statistics and report, one awarded line per crew member, state succeeded.
+ * Does nothing (and returns false) when the run is no longer running — it was
+ * cancelled, or another worker holds it.
+ */
+export async function finishRun(runId: string, result: AwardResult, elapsedMs: number): Promise<boolean> {
+  const award = awardSchema.parse(result.award);
+  return db().$transaction(async (tx) => {
+    const run = await tx.awardRun.findUnique({ where: { id: runId }, select: { state: true, awardGroup: { select: { bidPeriod: { select: { baseId: true } } } } } });
+    if (!run || run.state !== "running") return false;
+    const crew = await tx.crewMember.findMany({
+      where: { employeeNumber: { in: award.lines.map((l) => l.crewId) } },
+      select: { id: true, employeeNumber: true },
+    });
+    const idOf = new Map(crew.map((c) => [c.employeeNumber, c.id]));
+    const missing = award.lines.filter((l) => !idOf.has(l.crewId)).map((l) => l.crewId);
+    if (missing.length) throw new AppError("invalid", `the award names crew the database does not know: ${missing.join(", ")}`);
+    await tx.awardedLine.deleteMany({ where: { awardRunId: runId } });
+    await tx.awardedLine.createMany({
+      data: award.lines.map((l) => ({
+        awardRunId: runId,
+        crewMemberId: idOf.get(l.crewId)!,
+        kind: l.kind,
+        pairingCodes: l.pairings,
+        reserveDays: l.reserveDays,
+        creditMinutes: l.creditMinutes,
+        score: l.score,
+        satisfaction: l.satisfaction,
+      })),
+    });
+    await tx.awardRun.update({
+      where: { id: runId },
+      data: {
+        state: "succeeded",
+        award: json(award),
+        stats: json({ ...result.stats, report: result.report }),
+        finishedAt: new Date(),
+        leaseUntil: null,
+        progress: { phase: "done", percent: 100, message: "Done", elapsedMs } satisfies RunProgress,
+      },
+    });
+    return true;
+  });
+}
+
+/** Closes a running run as failed with a message saying why (a finished run is left as it is). */
+export async function failRun(runId: string, message: string): Promise<void> {
+  await db().awardRun.updateMany({
+    where: { id: runId, state: { in: ["queued", "running"] } },
+    data: { state: "failed", error: message, finishedAt: new Date(), leaseUntil: null },
+  });
+}
+
+/** Closes a run the worker stopped on request as cancelled. */
+export async function markCancelled(runId: string): Promise<void> {
+  await db().awardRun.updateMany({
+    where: { id: runId, state: { in: ["queued", "running"] } },
+    data: { state: "cancelled", finishedAt: new Date(), leaseUntil: null },
+  });
+}
+
+/**
+ * "Cancel": a queued run is cancelled at once (its job then finds nothing to
+ * claim); a running one is asked to stop, and its worker closes it as
+ * cancelled at its next check. A finished run cannot be cancelled.
+ */
+export async function cancelRun(runId: string, now = new Date()): Promise<"cancelled" | "stopping"> {
+  const queued = await db().awardRun.updateMany({ where: { id: runId, state: "queued" }, data: { state: "cancelled", cancelRequestedAt: now, finishedAt: now } });
+  if (queued.count === 1) return "cancelled";
+  const running = await db().awardRun.updateMany({ where: { id: runId, state: "running" }, data: { cancelRequestedAt: now } });
+  if (running.count === 1) return "stopping";
+  const run = await db().awardRun.findUnique({ where: { id: runId }, select: { state: true } });
+  if (!run) throw new AppError("not_found", `no award run ${runId}`);
+  throw new AppError("conflict", `the run has ${run.state === "succeeded" ? "finished" : run.state === "failed" ? "failed" : "been cancelled"} already: there is nothing to cancel`);
 }

@@ -11,9 +11,13 @@ export interface AwardJob {
   runId: string;
 }
 
-/** A started pg-boss with the award queue in place. */
-export async function startQueue(databaseUrl: string, log: (l: string) => void = () => {}): Promise<PgBoss> {
-  const boss = new PgBoss({ connectionString: databaseUrl, schema: BOSS_SCHEMA });
+/**
+ * A started pg-boss with the award queue in place. Its maintenance (which
+ * expires the jobs of dead workers, so that they are retried) runs every
+ * `maintenanceIntervalSeconds` (default 30).
+ */
+export async function startQueue(databaseUrl: string, log: (l: string) => void = () => {}, options: { maintenanceIntervalSeconds?: number } = {}): Promise<PgBoss> {
+  const boss = new PgBoss({ connectionString: databaseUrl, schema: BOSS_SCHEMA, maintenanceIntervalSeconds: options.maintenanceIntervalSeconds ?? 30 });
   boss.on("error", (e: Error) => log(`queue error: ${e.message}`));
   await boss.start();
   // pg-boss 10 returns null from send() for a missing queue instead of throwing.

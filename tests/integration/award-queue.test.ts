@@ -1,53 +1,95 @@
+/**
+ * The award job through pg-boss and PostgreSQL: a scheduler's request queues
+ * one job per award group, the worker claims the run (the run row is the lock),
+ * runs lib/award in a thread, writes progress and then the results in one
+ * transaction; cancel stops a running run and touches nothing else.
+ */
 import type PgBoss from "pg-boss";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
-import { claimRun } from "@/lib/db/award-runs";
+import { awardSchema, sha256Hex } from "@/lib/domain";
+import { cancelRun, claimRun, markCancelled, requestRun } from "@/lib/db/award-runs";
 import { db } from "@/lib/db/client";
 import { startAwardWorker } from "@/lib/jobs/award-worker";
 import { AWARD_QUEUE, startQueue } from "@/lib/jobs/queue";
-import { smallScenario } from "@/seed/small-scenario";
-import { writeScenario } from "@/seed/write-scenario";
+import { seedDemoIfEmpty } from "@/seed/demo";
 import { truncateAll } from "../support/reset";
+import { groupWithLimit, watchRun } from "../support/award-runs";
 
-async function queuedRun(): Promise<string> {
-  const group = await db().awardGroup.findFirstOrThrow();
-  const run = await db().awardRun.create({
-    data: { awardGroupId: group.id, settings: {}, instance: {}, instanceHash: "0".repeat(64) },
-  });
-  return run.id;
-}
+const NOW = new Date("2026-12-01T12:00:00Z");
 
-describe("the award queue", () => {
+describe("the award job", { timeout: 180_000 }, () => {
   let boss: PgBoss;
+  const log: string[] = [];
   beforeAll(async () => {
     await truncateAll(inject("databaseUrl"));
-    await writeScenario(db(), smallScenario({ now: new Date("2026-12-01T12:00:00Z") }));
-    boss = await startQueue(inject("databaseUrl"));
+    await seedDemoIfEmpty(db(), NOW);
+    boss = await startQueue(inject("databaseUrl"), (l) => log.push(l), { maintenanceIntervalSeconds: 1 });
   });
   afterAll(async () => {
     await boss.stop({ graceful: false });
   });
 
   it("lets only one claimer take a run (the run row is the lock)", async () => {
-    const id = await queuedRun();
-    const claims = await Promise.all([claimRun(id), claimRun(id), claimRun(id)]);
-    expect(claims.filter(Boolean)).toHaveLength(1);
-    expect((await db().awardRun.findUniqueOrThrow({ where: { id } })).state).toBe("running");
+    const { runId } = await requestRun(boss, { groupId: await groupWithLimit("captain", 5) });
+    const claims = await Promise.all([claimRun(runId), claimRun(runId), claimRun(runId)]);
+    expect(claims.map((c) => c.kind).sort()).toEqual(["claimed", "held", "held"]);
+    expect((await db().awardRun.findUniqueOrThrow({ where: { id: runId } })).state).toBe("running");
+    await markCancelled(runId); // its job then finds nothing to do
   });
 
-  it("delivers a job to the worker, which closes the run with a plain message", async () => {
-    const lines: string[] = [];
-    await startAwardWorker(boss, (l) => lines.push(l));
-    const id = await queuedRun();
-    // Starting the queue twice is harmless: the queue already exists.
-    await (await startQueue(inject("databaseUrl"))).stop({ graceful: false });
-    expect(await boss.send(AWARD_QUEUE, { runId: id })).toBeTruthy();
-    let run = await db().awardRun.findUniqueOrThrow({ where: { id } });
-    for (let i = 0; i < 100 && run.state !== "failed"; i++) {
-      await new Promise((r) => setTimeout(r, 200));
-      run = await db().awardRun.findUniqueOrThrow({ where: { id } });
-    }
-    expect(run.state).toBe("failed");
-    expect(run.error).toMatch(/no award engine yet/);
-    expect(run.finishedAt).not.toBeNull();
+  let firstRun = "";
+  it("runs an award end to end: stored progress takes several values before 100 %, then the results", async () => {
+    await startAwardWorker(boss, (l) => log.push(l), { heartbeatMs: 200 });
+    const groupId = await groupWithLimit("captain", 6);
+    const { runId, instanceHash } = await requestRun(boss, { groupId });
+    firstRun = runId;
+    const { run, seen } = await watchRun(runId, (r) => r.state !== "queued" && r.state !== "running", 120_000);
+    expect(run.state, `${run.error}; ${log.join(" | ")}`).toBe("succeeded");
+    const before100 = new Set(seen.filter((p) => p.percent < 100).map((p) => p.percent));
+    expect(before100.size).toBeGreaterThanOrEqual(3);
+    expect(seen.at(-1)!.percent).toBe(100);
+    // The run keeps its input's hash (RFC 8785 canonical JSON, SHA-256), its results and its statistics.
+    expect(sha256Hex(run.instance)).toBe(instanceHash);
+    expect(run.instanceHash).toBe(instanceHash);
+    const award = awardSchema.parse(run.award);
+    const crew = await db().crewMember.count({ where: { position: "captain" } });
+    expect(award.lines).toHaveLength(crew);
+    expect(await db().awardedLine.count({ where: { awardRunId: runId } })).toBe(crew);
+    expect((run.stats as { report?: { method?: string } }).report?.method).toBe("column-generation");
+    expect(run.finishedAt!.getTime()).toBeGreaterThan(run.startedAt!.getTime());
+  });
+
+  it("cancels a running run, which ends as cancelled; the earlier run keeps its results", async () => {
+    const before = await db().awardRun.findUniqueOrThrow({ where: { id: firstRun }, include: { lines: true } });
+    const { runId } = await requestRun(boss, { groupId: await groupWithLimit("captain", 120) });
+    const running = await watchRun(runId, (r) => r.state === "running" && r.progress.percent > 0, 60_000);
+    expect(running.run.state).toBe("running");
+    expect(await cancelRun(runId)).toBe("stopping");
+    const { run } = await watchRun(runId, (r) => r.state !== "running", 60_000);
+    expect(run.state).toBe("cancelled");
+    expect(run.award).toBeNull();
+    expect(await db().awardedLine.count({ where: { awardRunId: runId } })).toBe(0);
+    const after = await db().awardRun.findUniqueOrThrow({ where: { id: firstRun }, include: { lines: true } });
+    expect(after).toEqual(before);
+    // A finished run cannot be cancelled.
+    await expect(cancelRun(firstRun)).rejects.toThrow(/finished already/);
+  });
+
+  it("cancels a queued run at once", async () => {
+    // A run whose job is not on the queue yet: straight to cancelled.
+    const group = await db().awardGroup.findFirstOrThrow({ where: { position: "first_officer" } });
+    const run = await db().awardRun.create({ data: { awardGroupId: group.id, settings: {}, instance: {}, instanceHash: "0".repeat(64) } });
+    expect(await cancelRun(run.id)).toBe("cancelled");
+    expect((await db().awardRun.findUniqueOrThrow({ where: { id: run.id } })).state).toBe("cancelled");
+  });
+
+  it("closes a run that cannot be worked with the reason", async () => {
+    const group = await db().awardGroup.findFirstOrThrow({ where: { position: "first_officer" } });
+    const run = await db().awardRun.create({ data: { awardGroupId: group.id, settings: {}, instance: { not: "an instance" }, instanceHash: "0".repeat(64) } });
+    expect(await boss.send(AWARD_QUEUE, { runId: run.id })).toBeTruthy();
+    const { run: after } = await watchRun(run.id, (r) => r.state !== "queued" && r.state !== "running", 30_000);
+    expect(after.state).toBe("failed");
+    expect(after.error).toMatch(/the run's instance cannot be read/);
+    expect(after.finishedAt).not.toBeNull();
   });
 });
