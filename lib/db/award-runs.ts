@@ -190,3 +190,92 @@ export async function cancelRun(runId: string, now = new Date()): Promise<"cance
   if (!run) throw new AppError("not_found", `no award run ${runId}`);
   throw new AppError("conflict", `the run has ${run.state === "succeeded" ? "finished" : run.state === "failed" ? "failed" : "been cancelled"} already: there is nothing to cancel`);
 }
+
+/** A run as the planning pages list it. */
+export interface RunSummary {
+  id: string;
+  state: "queued" | "running" | "succeeded" | "failed" | "cancelled";
+  progress: RunProgress;
+  error: string | null;
+  createdAt: string;
+  finishedAt: string | null;
+  requestedBy: string | null;
+  cancelAsked: boolean;
+  mode: string;
+  timeLimitSeconds: number;
+}
+
+const summarySelect = {
+  id: true, state: true, progress: true, error: true, createdAt: true, finishedAt: true, settings: true, cancelRequestedAt: true,
+  requestedBy: { select: { name: true } },
+} as const;
+
+function summary(run: {
+  id: string; state: RunSummary["state"]; progress: unknown; error: string | null; createdAt: Date; finishedAt: Date | null; settings: unknown; cancelRequestedAt: Date | null;
+  requestedBy: { name: string } | null;
+}): RunSummary {
+  const settings = (run.settings ?? {}) as { mode?: string; timeLimitSeconds?: number };
+  const progress = run.progress as Partial<RunProgress>;
+  return {
+    id: run.id,
+    state: run.state,
+    progress: { phase: progress.phase ?? "queued", percent: progress.percent ?? 0, message: progress.message ?? "", elapsedMs: progress.elapsedMs ?? 0 },
+    error: run.error,
+    createdAt: run.createdAt.toISOString(),
+    finishedAt: run.finishedAt?.toISOString() ?? null,
+    requestedBy: run.requestedBy?.name ?? null,
+    cancelAsked: run.cancelRequestedAt !== null,
+    mode: settings.mode ?? "balanced",
+    timeLimitSeconds: settings.timeLimitSeconds ?? 0,
+  };
+}
+
+/** A bid period's award groups with their settings and runs, newest run first. */
+export async function periodRuns(periodId: string) {
+  const period = await db().bidPeriod.findUnique({
+    where: { id: periodId },
+    include: {
+      base: { select: { stationCode: true } },
+      groups: { orderBy: { position: "asc" }, include: { runs: { orderBy: { createdAt: "desc" }, select: summarySelect } } },
+    },
+  });
+  if (!period) throw new AppError("not_found", "no such bid period");
+  return {
+    id: period.id,
+    name: period.name,
+    baseCode: period.base.stationCode,
+    state: period.state,
+    zone: period.zone,
+    groups: period.groups.map((g) => {
+      const settings = (g.settings ?? {}) as { mode?: string; timeLimitSeconds?: number };
+      return { id: g.id, position: g.position, mode: settings.mode ?? "balanced", timeLimitSeconds: settings.timeLimitSeconds ?? 600, runs: g.runs.map(summary) };
+    }),
+  };
+}
+
+/** One run with its group and period, and (when it succeeded) its award and report. */
+export async function runDetail(runId: string) {
+  const run = await db().awardRun.findUnique({
+    where: { id: runId },
+    select: { ...summarySelect, award: true, stats: true, instanceHash: true, awardGroup: { select: { position: true, bidPeriod: { select: { id: true, name: true, zone: true } } } } },
+  });
+  if (!run) throw new AppError("not_found", "no such award run");
+  const award = run.award ? awardSchema.parse(run.award) : null;
+  const report = (run.stats as { report?: { openPositions?: number; openCreditMinutes?: number; provenOptimal?: boolean; warnings?: string[] } } | null)?.report ?? null;
+  const crew = award
+    ? await db().crewMember.findMany({ where: { employeeNumber: { in: award.lines.map((l) => l.crewId) } }, select: { employeeNumber: true, name: true, seniority: true } })
+    : [];
+  return { ...summary(run), instanceHash: run.instanceHash, position: run.awardGroup.position, period: run.awardGroup.bidPeriod, award, report, crew };
+}
+
+/** What the progress bar polls: state, progress and error of one run. */
+export async function runStatus(runId: string): Promise<RunSummary> {
+  const run = await db().awardRun.findUnique({ where: { id: runId }, select: summarySelect });
+  if (!run) throw new AppError("not_found", "no such award run");
+  return summary(run);
+}
+
+/** An audit entry for a scheduler's action on a run. */
+export async function auditRun(actorUserId: string, action: "award-run.requested" | "award-run.cancel", runId: string, detail: Record<string, string> = {}): Promise<void> {
+  await db().auditEvent.create({ data: { actorUserId, action, entity: "AwardRun", entityId: runId, detail } });
+}

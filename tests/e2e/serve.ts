@@ -2,7 +2,7 @@
  * The web server the browser tests talk to: a database of its own (see
  * tests/support/test-database.ts), migrated and seeded with the small scenario
  * at a fixed clock and the period before it (seed/past-period.ts), a production build when the sources changed, `next start`
- * on the test port. Playwright starts and stops this process.
+ * on the test port and an award worker. Playwright starts and stops this process.
  */
 import { spawn, spawnSync } from "node:child_process";
 import fs from "node:fs";
@@ -53,12 +53,21 @@ const web = spawn(next, ["start", "-p", String(E2E_PORT)], {
   },
 });
 
+// The award worker, as the demo runs it (`npm run worker`).
+const worker = spawn(process.execPath, ["--import", "tsx", path.join(REPO_ROOT, "lib/jobs/worker-main.ts")], {
+  cwd: REPO_ROOT,
+  stdio: "inherit",
+  env: { ...process.env, DATABASE_URL: db.url },
+});
+
 let stopping = false;
 async function stop() {
   if (stopping) return;
   stopping = true;
   web.kill("SIGTERM");
+  worker.kill("SIGTERM");
   await new Promise((r) => (web.exitCode !== null ? r(null) : web.once("exit", r)));
+  await new Promise((r) => (worker.exitCode !== null ? r(null) : worker.once("exit", r)));
   fs.rmSync(E2E_DATABASE_FILE, { force: true });
   await db.drop();
   process.exit(0);

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { requireRole } from "@/lib/auth/session";
 import { listPeriods } from "@/lib/db/periods";
 import { shortDate, zonedDateTime } from "@/app/ui/format";
@@ -38,7 +39,11 @@ export default async function PlanningHome() {
             <tbody>
               {periods.map((p) => (
                 <tr key={p.id} className="border-b border-slate-100 last:border-0" data-period={p.name}>
-                  <td className="px-3 py-2 font-medium">{p.name}</td>
+                  <td className="px-3 py-2 font-medium">
+                    <Link href={`/planning/periods/${p.id}`} className="text-sky-800 underline">
+                      {p.name}
+                    </Link>
+                  </td>
                   <td className="px-3 py-2 font-mono">{p.baseCode}</td>
                   <td className="px-3 py-2">
                     {shortDate(p.startDate)} – {shortDate(p.endDate)}

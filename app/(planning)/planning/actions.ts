@@ -1,0 +1,44 @@
+"use server";
+
+import { revalidatePath } from "next/cache";
+import { redirect } from "next/navigation";
+import { z } from "zod";
+import { requireRole } from "@/lib/auth/session";
+import { auditRun, cancelRun, requestRun } from "@/lib/db/award-runs";
+import { databaseUrl } from "@/lib/env";
+import { queueSender } from "@/lib/jobs/queue";
+import { errorMessage } from "@/app/ui/error-message";
+
+export type ActionOutcome = { status: "refused"; message: string } | undefined;
+
+const id = z.string().min(1).max(64);
+
+/** "Run award" for one award group: queues the run and opens its page. */
+export async function runAwardAction(_previous: ActionOutcome, form: FormData): Promise<ActionOutcome> {
+  const user = await requireRole("scheduler", "admin");
+  const groupId = id.safeParse(form.get("groupId"));
+  if (!groupId.success) return { status: "refused", message: "The request named no award group; nothing was queued." };
+  let runId: string;
+  try {
+    ({ runId } = await requestRun(await queueSender(databaseUrl()), { groupId: groupId.data, requestedById: user.id }));
+    await auditRun(user.id, "award-run.requested", runId, { groupId: groupId.data });
+  } catch (error) {
+    return { status: "refused", message: errorMessage(error) };
+  }
+  redirect(`/planning/runs/${runId}`);
+}
+
+/** "Cancel" on a queued or running run. */
+export async function cancelRunAction(_previous: ActionOutcome, form: FormData): Promise<ActionOutcome> {
+  const user = await requireRole("scheduler", "admin");
+  const runId = id.safeParse(form.get("runId"));
+  if (!runId.success) return { status: "refused", message: "The request named no run; nothing was changed." };
+  try {
+    const outcome = await cancelRun(runId.data);
+    await auditRun(user.id, "award-run.cancel", runId.data, { outcome });
+  } catch (error) {
+    return { status: "refused", message: errorMessage(error) };
+  }
+  revalidatePath(`/planning/runs/${runId.data}`);
+  return undefined;
+}

@@ -1,0 +1,83 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { requireRole } from "@/lib/auth/session";
+import { periodRuns } from "@/lib/db/award-runs";
+import { isAppError } from "@/lib/domain/index";
+import { zonedDateTime } from "@/app/ui/format";
+import { RunAwardButton } from "../../run-award-button";
+import { elapsed, MODE_LABEL, POSITION_LABEL, STATE_LABEL, STATE_STYLE } from "../../run-labels";
+
+export const metadata: Metadata = { title: "Bid period" };
+
+export default async function PeriodPage({ params }: { params: Promise<{ id: string }> }) {
+  await requireRole("scheduler", "admin");
+  const period = await periodRuns((await params).id).catch((e: unknown) => {
+    if (isAppError(e, "not_found")) notFound();
+    throw e;
+  });
+  return (
+    <section className="space-y-6">
+      <div>
+        <p className="text-sm text-slate-500">
+          <Link href="/planning" className="underline">
+            Bid periods
+          </Link>{" "}
+          / {period.baseCode}
+        </p>
+        <h1 className="text-xl font-semibold">{period.name}</h1>
+        <p className="text-sm text-slate-600">State: {period.state} · times in {period.zone}</p>
+      </div>
+      {period.groups.map((g) => (
+        <section key={g.id} aria-label={POSITION_LABEL[g.position] ?? g.position} className="rounded-lg border border-slate-200 bg-white p-4">
+          <div className="flex flex-wrap items-center justify-between gap-3">
+            <div>
+              <h2 className="font-semibold">{POSITION_LABEL[g.position] ?? g.position}</h2>
+              <p className="text-sm text-slate-600">
+                {MODE_LABEL[g.mode] ?? g.mode} · time limit {elapsed(g.timeLimitSeconds * 1000)}
+              </p>
+            </div>
+            <RunAwardButton groupId={g.id} label={`Run award: ${POSITION_LABEL[g.position] ?? g.position}`} />
+          </div>
+          {g.runs.length === 0 ? (
+            <p className="mt-3 text-sm text-slate-600">No runs yet.</p>
+          ) : (
+            <div className="mt-3 overflow-x-auto">
+              <table className="w-full min-w-[32rem] text-left text-sm">
+                <thead className="text-xs uppercase tracking-wide text-slate-500">
+                  <tr>
+                    <th className="py-1 pr-3 font-medium">Requested</th>
+                    <th className="py-1 pr-3 font-medium">By</th>
+                    <th className="py-1 pr-3 font-medium">Mode</th>
+                    <th className="py-1 pr-3 font-medium">State</th>
+                    <th className="py-1 font-medium" />
+                  </tr>
+                </thead>
+                <tbody>
+                  {g.runs.map((r) => (
+                    <tr key={r.id} className="border-t border-slate-100">
+                      <td className="py-1.5 pr-3">{zonedDateTime(r.createdAt, period.zone)}</td>
+                      <td className="py-1.5 pr-3">{r.requestedBy ?? "—"}</td>
+                      <td className="py-1.5 pr-3">{MODE_LABEL[r.mode] ?? r.mode}</td>
+                      <td className="py-1.5 pr-3">
+                        <span className={`rounded px-2 py-0.5 text-xs font-medium ${STATE_STYLE[r.state] ?? ""}`}>
+                          {STATE_LABEL[r.state] ?? r.state}
+                          {r.state === "running" ? ` ${r.progress.percent.toFixed(0)} %` : ""}
+                        </span>
+                      </td>
+                      <td className="py-1.5 text-right">
+                        <Link href={`/planning/runs/${r.id}`} className="text-sky-800 underline">
+                          Open
+                        </Link>
+                      </td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
+          )}
+        </section>
+      ))}
+    </section>
+  );
+}

@@ -1,0 +1,34 @@
+import fs from "node:fs";
+import pg from "pg";
+import { E2E_DATABASE_FILE } from "./constants.ts";
+import { expect, signIn, test } from "./helpers.ts";
+
+// A scheduler runs the award for one group and watches the progress bar reach 100 %.
+test("a scheduler runs the award, watches its progress and sees the lines", async ({ page }) => {
+  test.setTimeout(120_000);
+  const { url } = JSON.parse(fs.readFileSync(E2E_DATABASE_FILE, "utf8")) as { url: string };
+  const client = new pg.Client({ connectionString: url });
+  await client.connect();
+  try {
+    // A short time limit for the captains' group, so the run ends within the test.
+    await client.query(`UPDATE "AwardGroup" SET settings = jsonb_set(settings::jsonb, '{timeLimitSeconds}', '8') WHERE position = 'captain'`);
+  } finally {
+    await client.end();
+  }
+  await signIn(page, "planning@larkfield.test");
+  await page.getByRole("link", { name: "January 2027" }).click();
+  await page.getByRole("button", { name: "Run award: Captains" }).click();
+  await expect(page).toHaveURL(/\/planning\/runs\//);
+  const bar = page.getByRole("progressbar", { name: "Award run progress" });
+  await expect(bar).toBeVisible();
+  // The bar moves while the worker works, then reaches 100 % and the results appear.
+  await expect(bar).toHaveAttribute("aria-valuenow", "100", { timeout: 90_000 });
+  await expect(page.getByText("Finished", { exact: true })).toBeVisible();
+  await expect(page.getByRole("table", { name: "Lines by seniority" })).toBeVisible({ timeout: 15_000 });
+  await expect(page.getByRole("note")).toContainText("not a certified compliance system");
+  const rows = page.getByRole("table", { name: "Lines by seniority" }).locator("tbody tr");
+  await expect(rows).toHaveCount(6);
+  // The period page lists the run as finished.
+  await page.getByRole("link", { name: "January 2027" }).click();
+  await expect(page.getByRole("region", { name: "Captains" }).getByText("Finished")).toBeVisible();
+});

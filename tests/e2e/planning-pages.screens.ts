@@ -1,0 +1,30 @@
+import fs from "node:fs";
+import path from "node:path";
+import pg from "pg";
+import { E2E_DATABASE_FILE } from "./constants.ts";
+import { expect, signIn, test } from "./helpers.ts";
+
+const OUT = path.resolve(import.meta.dirname, "../../docs/screens");
+
+// Planning is laptop work: a laptop-sized window, and the run page on a phone as well.
+test("laptop and phone screenshots of the period page and an award run", async ({ page }) => {
+  test.setTimeout(120_000);
+  const { url } = JSON.parse(fs.readFileSync(E2E_DATABASE_FILE, "utf8")) as { url: string };
+  const client = new pg.Client({ connectionString: url });
+  await client.connect();
+  await client.query(`UPDATE "AwardGroup" SET settings = jsonb_set(settings::jsonb, '{timeLimitSeconds}', '12') WHERE position = 'captain'`);
+  await client.end();
+  await page.setViewportSize({ width: 1280, height: 800 });
+  await signIn(page, "planning@larkfield.test");
+  await page.getByRole("link", { name: "January 2027" }).click();
+  await page.screenshot({ path: path.join(OUT, "period-page.png"), fullPage: true });
+  await page.getByRole("button", { name: "Run award: Captains" }).click();
+  const bar = page.getByRole("progressbar", { name: "Award run progress" });
+  await expect(bar).not.toHaveAttribute("aria-valuenow", "0", { timeout: 30_000 });
+  await page.screenshot({ path: path.join(OUT, "run-progress.png") });
+  await expect(bar).toHaveAttribute("aria-valuenow", "100", { timeout: 90_000 });
+  await expect(page.getByRole("table", { name: "Lines by seniority" })).toBeVisible({ timeout: 15_000 });
+  await page.screenshot({ path: path.join(OUT, "run-finished.png"), fullPage: true });
+  await page.setViewportSize({ width: 360, height: 780 });
+  await page.screenshot({ path: path.join(OUT, "run-finished-phone.png"), fullPage: true });
+});
