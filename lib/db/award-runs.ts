@@ -248,7 +248,7 @@ export async function periodRuns(periodId: string) {
     zone: period.zone,
     groups: period.groups.map((g) => {
       const settings = (g.settings ?? {}) as { mode?: string; timeLimitSeconds?: number };
-      return { id: g.id, position: g.position, mode: settings.mode ?? "balanced", timeLimitSeconds: settings.timeLimitSeconds ?? 600, runs: g.runs.map(summary) };
+      return { id: g.id, position: g.position, chosenRunId: g.chosenRunId, mode: settings.mode ?? "balanced", timeLimitSeconds: settings.timeLimitSeconds ?? 600, runs: g.runs.map(summary) };
     }),
   };
 }

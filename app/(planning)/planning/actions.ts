@@ -7,6 +7,7 @@ import { requireRole } from "@/lib/auth/session";
 import { auditRun, cancelRun, requestRun } from "@/lib/db/award-runs";
 import { databaseUrl } from "@/lib/env";
 import { queueSender } from "@/lib/jobs/queue";
+import { publishPeriod, type PublishOutcome } from "@/lib/db/publish";
 import { errorMessage } from "@/app/ui/error-message";
 
 export type ActionOutcome = { status: "refused"; message: string } | undefined;
@@ -41,4 +42,25 @@ export async function cancelRunAction(_previous: ActionOutcome, form: FormData):
   }
   revalidatePath(`/planning/runs/${runId.data}`);
   return undefined;
+}
+
+export type PublishState = PublishOutcome | { status: "refused"; message: string } | undefined;
+
+/** "Publish award": the chosen run of every award group, after the scheduler confirms they reviewed them. */
+export async function publishAction(_previous: PublishState, form: FormData): Promise<PublishState> {
+  const user = await requireRole("scheduler", "admin");
+  const periodId = id.safeParse(form.get("periodId"));
+  if (!periodId.success) return { status: "refused", message: "The request named no bid period; nothing was published." };
+  if (form.get("reviewed") !== "yes") return { status: "refused", message: "Confirm that you reviewed the chosen runs; nothing was published." };
+  const runs: Record<string, string> = {};
+  for (const [key, value] of form.entries()) {
+    if (key.startsWith("run:") && typeof value === "string" && value) runs[key.slice(4)] = value;
+  }
+  try {
+    const outcome = await publishPeriod({ periodId: periodId.data, runs, reviewerId: user.id });
+    revalidatePath(`/planning/periods/${periodId.data}`);
+    return outcome;
+  } catch (error) {
+    return { status: "refused", message: errorMessage(error) };
+  }
 }

@@ -6,6 +6,7 @@ import { periodRuns } from "@/lib/db/award-runs";
 import { isAppError } from "@/lib/domain/index";
 import { zonedDateTime } from "@/app/ui/format";
 import { RunAwardButton } from "../../run-award-button";
+import { PublishForm } from "./publish-form";
 import { elapsed, MODE_LABEL, POSITION_LABEL, STATE_LABEL, STATE_STYLE } from "../../run-labels";
 
 export const metadata: Metadata = { title: "Bid period" };
@@ -60,6 +61,7 @@ export default async function PeriodPage({ params }: { params: Promise<{ id: str
                       <td className="py-1.5 pr-3">{r.requestedBy ?? "—"}</td>
                       <td className="py-1.5 pr-3">{MODE_LABEL[r.mode] ?? r.mode}</td>
                       <td className="py-1.5 pr-3">
+                        {r.id === g.chosenRunId ? <span className="mr-1 rounded bg-indigo-50 px-2 py-0.5 text-xs font-medium text-indigo-800">Published</span> : null}
                         <span className={`rounded px-2 py-0.5 text-xs font-medium ${STATE_STYLE[r.state] ?? ""}`}>
                           {STATE_LABEL[r.state] ?? r.state}
                           {r.state === "running" ? ` ${r.progress.percent.toFixed(0)} %` : ""}
@@ -78,6 +80,22 @@ export default async function PeriodPage({ params }: { params: Promise<{ id: str
           )}
         </section>
       ))}
+      {period.state === "closed" || period.state === "awarded" || period.state === "published" ? (
+        <PublishForm
+          periodId={period.id}
+          published={period.state === "published"}
+          groups={period.groups.map((g) => ({
+            groupId: g.id,
+            label: POSITION_LABEL[g.position] ?? g.position,
+            chosenRunId: g.chosenRunId,
+            runs: g.runs
+              .filter((r) => r.state === "succeeded")
+              .map((r) => ({ id: r.id, label: `${zonedDateTime(r.createdAt, period.zone)} · ${MODE_LABEL[r.mode] ?? r.mode}${r.id === g.chosenRunId ? " · published" : ""}` })),
+          }))}
+        />
+      ) : (
+        <p className="text-sm text-slate-600">Publishing opens once bidding is closed.</p>
+      )}
     </section>
   );
 }

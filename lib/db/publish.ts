@@ -1,0 +1,101 @@
+/**
+ * Publishing a bid period's award (DESIGN.md, "Publishing again"): one run per
+ * award group, all groups in one transaction, with the scheduler who reviewed
+ * them recorded. Crew then see their line.
+ *
+ * - Only a closed, awarded or published period can be published: while
+ *   bidding is open the bids may still change.
+ * - Each run must have finished and be fresh: its input hash must equal the
+ *   hash of the group's instance exported now. A run made before a bid, a trip
+ *   or a crew member changed is stale and refused, naming the group.
+ * - Publishing the runs already published is a no-op with a message;
+ *   publishing other runs replaces the award (a correction), audited as such.
+ * - The period row is locked for the transaction, so two schedulers
+ *   publishing at once publish once.
+ */
+import { AppError, sha256Hex } from "../domain/index";
+import { db } from "./client";
+import { exportPeriod } from "./period-export";
+
+export type PublishOutcome = { status: "published" | "corrected" | "unchanged"; message: string };
+
+const POSITION = { captain: "captains", first_officer: "first officers", flight_attendant: "flight attendants", purser: "pursers" } as const;
+
+export async function publishPeriod(input: { periodId: string; runs: Record<string, string>; reviewerId: string; now?: Date }): Promise<PublishOutcome> {
+  const now = input.now ?? new Date();
+  // The export reads many tables: done before the transaction, and compared again inside it.
+  const bundle = await exportPeriod(db(), input.periodId);
+  return db().$transaction(async (tx) => {
+    await tx.$queryRaw`SELECT id FROM "BidPeriod" WHERE id = ${input.periodId} FOR UPDATE`;
+    const period = await tx.bidPeriod.findUnique({ where: { id: input.periodId }, include: { groups: true } });
+    if (!period) throw new AppError("not_found", "no such bid period");
+    if (period.state === "draft" || period.state === "open") {
+      throw new AppError("conflict", `bidding for ${period.name} is ${period.state === "open" ? "still open" : "not open yet"}: close it before publishing`);
+    }
+    const chosen = new Map<string, string>();
+    for (const group of period.groups) {
+      const label = POSITION[group.position];
+      const runId = input.runs[group.id];
+      if (!runId) throw new AppError("invalid", `choose a finished run for the ${label} before publishing`);
+      const run = await tx.awardRun.findUnique({ where: { id: runId }, select: { awardGroupId: true, state: true, instanceHash: true } });
+      if (!run || run.awardGroupId !== group.id) throw new AppError("invalid", `the run chosen for the ${label} is not one of theirs`);
+      if (run.state !== "succeeded") throw new AppError("conflict", `the run chosen for the ${label} has not finished`);
+      const instance = bundle.instances.find((i) => i.group.position === group.position);
+      if (!instance || sha256Hex(instance) !== run.instanceHash) {
+        throw new AppError("conflict", `the run chosen for the ${label} is stale: the period's bids, trips or crew changed after it ran; run the award again`);
+      }
+      chosen.set(group.id, runId);
+    }
+    const extra = Object.keys(input.runs).filter((g) => !chosen.has(g));
+    if (extra.length) throw new AppError("invalid", "a run was chosen for an award group this period does not have");
+    if (period.state === "published" && period.groups.every((g) => g.chosenRunId === chosen.get(g.id))) {
+      return { status: "unchanged", message: `${period.name} is already published with these runs; nothing was changed` };
+    }
+    const correction = period.state === "published";
+    // A run may be chosen by one group only (chosenRunId is unique): clear, then set.
+    await tx.awardGroup.updateMany({ where: { bidPeriodId: period.id }, data: { chosenRunId: null } });
+    for (const [groupId, runId] of chosen) {
+      await tx.awardGroup.update({ where: { id: groupId }, data: { chosenRunId: runId } });
+      await tx.awardRun.update({ where: { id: runId }, data: { reviewedById: input.reviewerId } });
+    }
+    await tx.bidPeriod.update({ where: { id: period.id }, data: { state: "published", publishedAt: now } });
+    await tx.auditEvent.create({
+      data: {
+        actorUserId: input.reviewerId,
+        action: correction ? "period.corrected" : "period.published",
+        entity: "BidPeriod",
+        entityId: period.id,
+        detail: Object.fromEntries(chosen),
+      },
+    });
+    return correction
+      ? { status: "corrected", message: `${period.name}: the corrected award is published and replaces the earlier one` }
+      : { status: "published", message: `${period.name} is published: crew now see their lines` };
+  });
+}
+
+/** A crew member's line in the latest published period of their base, or null when none is published. */
+export async function publishedLine(crewMemberId: string) {
+  const line = await db().awardedLine.findFirst({
+    where: { crewMemberId, awardRun: { chosenFor: { bidPeriod: { state: "published" } } } },
+    orderBy: { awardRun: { awardGroup: { bidPeriod: { startDate: "desc" } } } },
+    select: {
+      kind: true, pairingCodes: true, reserveDays: true, creditMinutes: true,
+      awardRun: { select: { awardGroup: { select: { bidPeriod: { select: { id: true, name: true, zone: true, publishedAt: true } } } } } },
+    },
+  });
+  if (!line) return null;
+  const period = line.awardRun.awardGroup.bidPeriod;
+  const trips = await db().pairing.findMany({
+    where: { bidPeriodId: period.id, code: { in: line.pairingCodes } },
+    orderBy: { startsAt: "asc" },
+    select: { code: true, startsAt: true, endsAt: true, creditMinutes: true },
+  });
+  return {
+    period: { name: period.name, zone: period.zone, publishedAt: period.publishedAt!.toISOString() },
+    kind: line.kind,
+    creditMinutes: line.creditMinutes,
+    reserveDays: line.reserveDays,
+    trips: trips.map((t) => ({ code: t.code, startsAt: t.startsAt.toISOString(), endsAt: t.endsAt.toISOString(), creditMinutes: t.creditMinutes })),
+  };
+}

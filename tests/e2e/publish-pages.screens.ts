@@ -1,0 +1,52 @@
+import fs from "node:fs";
+import pg from "pg";
+import { E2E_DATABASE_FILE } from "./constants.ts";
+import path from "node:path";
+import { expect, signIn, test } from "./helpers.ts";
+
+const OUT = path.resolve(import.meta.dirname, "../../docs/screens");
+
+// Last of the screens (it closes bidding): the publish form on a laptop, the crew member's line on a phone.
+test("screenshots of publishing and of a published line", async ({ page }) => {
+  test.setTimeout(180_000);
+  const { url } = JSON.parse(fs.readFileSync(E2E_DATABASE_FILE, "utf8")) as { url: string };
+  const client = new pg.Client({ connectionString: url });
+  await client.connect();
+  try {
+    await client.query(`UPDATE "AwardGroup" SET settings = jsonb_set(settings::jsonb, '{timeLimitSeconds}', '6')`);
+    // Closing bidding has no screen yet: the period is closed here, as the close step will do.
+    await client.query(`UPDATE "BidPeriod" SET state = 'closed', "closedAt" = now() WHERE name = 'January 2027'`);
+  } finally {
+    await client.end();
+  }
+  await signIn(page, "planning@larkfield.test");
+  await expect(page).toHaveURL(/\/planning$/);
+  for (const group of ["Captains", "First officers"]) {
+    await page.goto("/planning");
+    await page.getByRole("link", { name: "January 2027" }).click();
+    await page.getByRole("button", { name: `Run award: ${group}` }).click();
+    await expect(page.getByRole("progressbar", { name: "Award run progress" })).toHaveAttribute("aria-valuenow", "100", { timeout: 90_000 });
+  }
+  await page.goto("/planning");
+  await page.getByRole("link", { name: "January 2027" }).click();
+  await page.setViewportSize({ width: 1280, height: 800 });
+  const form = page.getByRole("form", { name: "Publish" });
+  // Without the review confirmed the browser refuses the form; with it, the award is published.
+  await form.getByRole("checkbox").check();
+  await form.getByRole("button", { name: "Publish award" }).click();
+  await expect(form.getByRole("status")).toHaveText("January 2027 is published: crew now see their lines");
+  await expect(page.getByText("State: published")).toBeVisible();
+  await page.screenshot({ path: path.join(OUT, "period-published.png"), fullPage: true });
+  await form.getByRole("checkbox").check();
+  await form.getByRole("button", { name: "Publish correction" }).click();
+  await expect(form.getByRole("status")).toHaveText("January 2027 is already published with these runs; nothing was changed");
+
+  await page.context().clearCookies();
+  await page.setViewportSize({ width: 360, height: 780 });
+  await signIn(page, "ines@larkfield.test");
+  await expect(page).toHaveURL(/\/trips$/);
+  await page.getByRole("link", { name: "My line" }).click();
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("My line · January 2027");
+  await expect(page.getByRole("listitem").first()).toContainText(/T\d+/);
+  await page.screenshot({ path: path.join(OUT, "my-line.png"), fullPage: true });
+});
