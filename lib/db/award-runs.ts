@@ -156,6 +156,9 @@ export async function finishRun(runId: string, result: AwardResult, elapsedMs: n
         progress: { phase: "done", percent: 100, message: "Done", elapsedMs } satisfies RunProgress,
       },
     });
+    // A closed period whose every award group now has a finished run is awarded (ready to review and publish).
+    const period = await tx.bidPeriod.findFirst({ where: { groups: { some: { runs: { some: { id: runId } } } } }, select: { id: true, state: true, groups: { select: { runs: { where: { state: "succeeded" }, select: { id: true }, take: 1 } } } } });
+    if (period?.state === "closed" && period.groups.every((g) => g.runs.length > 0)) await tx.bidPeriod.update({ where: { id: period.id }, data: { state: "awarded" } });
     return true;
   });
 }
@@ -246,6 +249,7 @@ export async function periodRuns(periodId: string) {
     baseCode: period.base.stationCode,
     state: period.state,
     zone: period.zone,
+    deadline: period.deadline.toISOString(),
     groups: period.groups.map((g) => {
       const settings = (g.settings ?? {}) as { mode?: string; timeLimitSeconds?: number };
       return { id: g.id, position: g.position, chosenRunId: g.chosenRunId, mode: settings.mode ?? "balanced", timeLimitSeconds: settings.timeLimitSeconds ?? 600, runs: g.runs.map(summary) };

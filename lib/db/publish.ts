@@ -59,6 +59,11 @@ export async function publishPeriod(input: { periodId: string; runs: Record<stri
       await tx.awardRun.update({ where: { id: runId }, data: { reviewedById: input.reviewerId } });
     }
     await tx.bidPeriod.update({ where: { id: period.id }, data: { state: "published", publishedAt: now } });
+    await tx.notice.create({
+      data: correction
+        ? { bidPeriodId: period.id, kind: "award_corrected", text: `The award for ${period.name} was corrected: see your line again.` }
+        : { bidPeriodId: period.id, kind: "award_published", text: `The award for ${period.name} is published: see your line.` },
+    });
     await tx.auditEvent.create({
       data: {
         actorUserId: input.reviewerId,

@@ -17,6 +17,8 @@ test("laptop and phone screenshots of the period page and an award run", async (
   await page.setViewportSize({ width: 1280, height: 800 });
   await signIn(page, "planning@larkfield.test");
   await page.getByRole("link", { name: "January 2027" }).click();
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("January 2027");
+  await page.evaluate(() => window.scrollTo(0, 0));
   await page.screenshot({ path: path.join(OUT, "period-page.png"), fullPage: true });
   await page.getByRole("button", { name: "Run award: Captains" }).click();
   const bar = page.getByRole("progressbar", { name: "Award run progress" });
@@ -24,7 +26,9 @@ test("laptop and phone screenshots of the period page and an award run", async (
   await page.screenshot({ path: path.join(OUT, "run-progress.png") });
   await expect(bar).toHaveAttribute("aria-valuenow", "100", { timeout: 90_000 });
   await expect(page.getByRole("table", { name: "Lines by seniority" })).toBeVisible({ timeout: 15_000 });
+  await page.evaluate(() => window.scrollTo(0, 0));
   await page.screenshot({ path: path.join(OUT, "run-finished.png"), fullPage: true });
   await page.setViewportSize({ width: 360, height: 780 });
+  await page.evaluate(() => window.scrollTo(0, 0));
   await page.screenshot({ path: path.join(OUT, "run-finished-phone.png"), fullPage: true });
 });

@@ -14,13 +14,17 @@ test("screenshots of publishing and of a published line", async ({ page }) => {
   await client.connect();
   try {
     await client.query(`UPDATE "AwardGroup" SET settings = jsonb_set(settings::jsonb, '{timeLimitSeconds}', '6')`);
-    // Closing bidding has no screen yet: the period is closed here, as the close step will do.
-    await client.query(`UPDATE "BidPeriod" SET state = 'closed', "closedAt" = now() WHERE name = 'January 2027'`);
   } finally {
     await client.end();
   }
   await signIn(page, "planning@larkfield.test");
   await expect(page).toHaveURL(/\/planning$/);
+  // Before the deadline (the server's clock starts on 1 December), closing is "close early", confirmed.
+  await page.getByRole("link", { name: "January 2027" }).click();
+  const close = page.getByRole("form", { name: "Close bidding early" });
+  await close.getByRole("checkbox").check();
+  await close.getByRole("button", { name: "Close bidding early" }).click();
+  await expect(page.getByText("State: closed")).toBeVisible();
   for (const group of ["Captains", "First officers"]) {
     await page.goto("/planning");
     await page.getByRole("link", { name: "January 2027" }).click();
@@ -36,6 +40,7 @@ test("screenshots of publishing and of a published line", async ({ page }) => {
   await form.getByRole("button", { name: "Publish award" }).click();
   await expect(form.getByRole("status")).toHaveText("January 2027 is published: crew now see their lines");
   await expect(page.getByText("State: published")).toBeVisible();
+  await page.evaluate(() => window.scrollTo(0, 0));
   await page.screenshot({ path: path.join(OUT, "period-published.png"), fullPage: true });
   await form.getByRole("checkbox").check();
   await form.getByRole("button", { name: "Publish correction" }).click();
@@ -48,5 +53,6 @@ test("screenshots of publishing and of a published line", async ({ page }) => {
   await page.getByRole("link", { name: "My line" }).click();
   await expect(page.getByRole("heading", { level: 1 })).toHaveText("My line · January 2027");
   await expect(page.getByRole("listitem").first()).toContainText(/T\d+/);
+  await page.evaluate(() => window.scrollTo(0, 0));
   await page.screenshot({ path: path.join(OUT, "my-line.png"), fullPage: true });
 });

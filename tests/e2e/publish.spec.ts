@@ -11,13 +11,17 @@ test("a scheduler publishes the award and a crew member sees their line", async 
   await client.connect();
   try {
     await client.query(`UPDATE "AwardGroup" SET settings = jsonb_set(settings::jsonb, '{timeLimitSeconds}', '6')`);
-    // Closing bidding has no screen yet: the period is closed here, as the close step will do.
-    await client.query(`UPDATE "BidPeriod" SET state = 'closed', "closedAt" = now() WHERE name = 'January 2027'`);
   } finally {
     await client.end();
   }
   await signIn(page, "planning@larkfield.test");
   await expect(page).toHaveURL(/\/planning$/);
+  // Before the deadline (the server's clock starts on 1 December), closing is "close early", confirmed.
+  await page.getByRole("link", { name: "January 2027" }).click();
+  const close = page.getByRole("form", { name: "Close bidding early" });
+  await close.getByRole("checkbox").check();
+  await close.getByRole("button", { name: "Close bidding early" }).click();
+  await expect(page.getByText("State: closed")).toBeVisible();
   for (const group of ["Captains", "First officers"]) {
     await page.goto("/planning");
     await page.getByRole("link", { name: "January 2027" }).click();
@@ -39,6 +43,10 @@ test("a scheduler publishes the award and a crew member sees their line", async 
   await page.context().clearCookies();
   await signIn(page, "ines@larkfield.test");
   await expect(page).toHaveURL(/\/trips$/);
+  // The crew home shows the notices: closed early, then published.
+  const notices = page.getByRole("region", { name: "Notices" });
+  await expect(notices).toContainText("The award for January 2027 is published: see your line.");
+  await expect(notices).toContainText("Bidding for January 2027 was closed early");
   await page.getByRole("link", { name: "My line" }).click();
   await expect(page.getByRole("heading", { level: 1 })).toHaveText("My line · January 2027");
   await expect(page.getByRole("listitem").first()).toContainText(/T\d+/);

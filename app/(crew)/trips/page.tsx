@@ -3,6 +3,7 @@ import { requireRole } from "@/lib/auth/session";
 import { openPeriodForCrew } from "@/lib/db/periods";
 import { zonedDateTime } from "@/app/ui/format";
 import { TripBrowser } from "./trip-browser";
+import { CrewNotices } from "@/app/ui/crew-notices";
 
 export const metadata: Metadata = { title: "Trips" };
 
@@ -12,6 +13,7 @@ export default async function TripsPage() {
   if (!period) {
     return (
       <section>
+        <CrewNotices crewMemberId={user.crewMemberId} />
         <h1 className="text-xl font-semibold">Trips</h1>
         <p className="mt-3 text-slate-600">Bidding is not open at your base right now.</p>
       </section>
@@ -19,6 +21,7 @@ export default async function TripsPage() {
   }
   return (
     <section>
+      <CrewNotices crewMemberId={user.crewMemberId} />
       <h1 className="text-xl font-semibold">
         {period.name} <span className="font-normal text-slate-500">· {period.baseName} ({period.baseCode})</span>
       </h1>

@@ -8,6 +8,9 @@ import { auditRun, cancelRun, requestRun } from "@/lib/db/award-runs";
 import { databaseUrl } from "@/lib/env";
 import { queueSender } from "@/lib/jobs/queue";
 import { publishPeriod, type PublishOutcome } from "@/lib/db/publish";
+import { closeBidding, extendDeadline, openBidding } from "@/lib/db/period-lifecycle";
+import { atLocalTime } from "@/lib/domain/time";
+import { now } from "@/lib/clock";
 import { errorMessage } from "@/app/ui/error-message";
 
 export type ActionOutcome = { status: "refused"; message: string } | undefined;
@@ -60,6 +63,31 @@ export async function publishAction(_previous: PublishState, form: FormData): Pr
     const outcome = await publishPeriod({ periodId: periodId.data, runs, reviewerId: user.id });
     revalidatePath(`/planning/periods/${periodId.data}`);
     return outcome;
+  } catch (error) {
+    return { status: "refused", message: errorMessage(error) };
+  }
+}
+
+export type StepState = { status: "done" | "refused"; message: string } | undefined;
+
+/** The bidding window's steps on the period page: open, extend the deadline, close (early only when confirmed). */
+export async function biddingStepAction(_previous: StepState, form: FormData): Promise<StepState> {
+  const user = await requireRole("scheduler", "admin");
+  const periodId = id.safeParse(form.get("periodId"));
+  const step = z.enum(["open", "extend", "close"]).safeParse(form.get("step"));
+  if (!periodId.success || !step.success) return { status: "refused", message: "The request was malformed; nothing was changed." };
+  if (form.get("confirmed") !== "yes") return { status: "refused", message: "Tick the confirmation first; nothing was changed." };
+  try {
+    let message: string;
+    if (step.data === "open") message = await openBidding(periodId.data, user.id, now());
+    else if (step.data === "close") message = await closeBidding(periodId.data, user.id, { early: form.get("early") === "yes" }, now());
+    else {
+      const when = z.object({ date: z.iso.date(), time: z.string().regex(/^\d{2}:\d{2}$/), zone: z.string().min(1) }).safeParse({ date: form.get("date"), time: form.get("time"), zone: form.get("zone") });
+      if (!when.success) return { status: "refused", message: "Give the new deadline as a date and a time; nothing was changed." };
+      message = await extendDeadline(periodId.data, new Date(atLocalTime(when.data.date, when.data.time, when.data.zone)), user.id, now());
+    }
+    revalidatePath(`/planning/periods/${periodId.data}`);
+    return { status: "done", message };
   } catch (error) {
     return { status: "refused", message: errorMessage(error) };
   }

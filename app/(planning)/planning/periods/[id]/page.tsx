@@ -7,6 +7,8 @@ import { isAppError } from "@/lib/domain/index";
 import { zonedDateTime } from "@/app/ui/format";
 import { RunAwardButton } from "../../run-award-button";
 import { PublishForm } from "./publish-form";
+import { BiddingSteps } from "./bidding-steps";
+import { now } from "@/lib/clock";
 import { elapsed, MODE_LABEL, POSITION_LABEL, STATE_LABEL, STATE_STYLE } from "../../run-labels";
 
 export const metadata: Metadata = { title: "Bid period" };
@@ -27,8 +29,14 @@ export default async function PeriodPage({ params }: { params: Promise<{ id: str
           / {period.baseCode}
         </p>
         <h1 className="text-xl font-semibold">{period.name}</h1>
-        <p className="text-sm text-slate-600">State: {period.state} · times in {period.zone}</p>
+        <p className="text-sm text-slate-600">
+          State: {period.state} · bids close {zonedDateTime(period.deadline, period.zone)} · times in {period.zone}
+        </p>
       </div>
+      <section aria-label="Bidding" className="rounded-lg border border-slate-200 bg-white p-4">
+        <h2 className="mb-2 font-semibold">Bidding</h2>
+        <BiddingSteps periodId={period.id} state={period.state} zone={period.zone} name={period.name} deadlinePassed={Date.parse(period.deadline) <= now().getTime()} />
+      </section>
       {period.groups.map((g) => (
         <section key={g.id} aria-label={POSITION_LABEL[g.position] ?? g.position} className="rounded-lg border border-slate-200 bg-white p-4">
           <div className="flex flex-wrap items-center justify-between gap-3">
