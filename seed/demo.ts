@@ -28,7 +28,9 @@ export function demoBundle(now: Date) {
     startDate: window.startDate,
     days: daysBetween(window.startDate, window.endDate) + 1,
   });
-  return { bundle, window };
+  // Two minutes per award group: a run a scheduler can watch (the engine's default is ten).
+  const instances = bundle.instances.map((i) => ({ ...i, settings: { ...i.settings, timeLimitSeconds: 120 } }));
+  return { bundle: { ...bundle, instances }, window };
 }
 
 /**
