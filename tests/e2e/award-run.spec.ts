@@ -28,6 +28,10 @@ test("a scheduler runs the award, watches its progress and sees the lines", asyn
   await expect(page.getByRole("note")).toContainText("not a certified compliance system");
   const rows = page.getByRole("table", { name: "Lines by seniority" }).locator("tbody tr");
   await expect(rows).toHaveCount(6);
+  // The review's charts: every crew member in the histogram's bars and as a dot of the scatter.
+  await expect(page.getByRole("img", { name: "Histogram: crew members per satisfaction band" })).toBeVisible();
+  await expect(page.getByRole("img", { name: "Scatter: satisfaction of each crew member by seniority place" }).locator("circle")).toHaveCount(6);
+  await expect(page.getByText("Jain's index")).toBeVisible();
   // The period page lists the run as finished.
   await page.getByRole("link", { name: "January 2027" }).click();
   await expect(page.getByRole("region", { name: "Captains" }).getByText("Finished")).toBeVisible();

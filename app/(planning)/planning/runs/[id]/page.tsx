@@ -8,6 +8,8 @@ import { hhmm, zonedDateTime } from "@/app/ui/format";
 import { LegalityCaution } from "@/app/ui/legality-caution";
 import { elapsed, MODE_LABEL, POSITION_LABEL } from "../../run-labels";
 import { RunProgress } from "./run-progress";
+import { SatisfactionBySeniority, SatisfactionHistogram } from "./charts";
+import { fairnessReport } from "@/lib/fairness";
 
 export const metadata: Metadata = { title: "Award run" };
 
@@ -20,7 +22,8 @@ export default async function RunPage({ params }: { params: Promise<{ id: string
   const names = new Map(run.crew.map((c) => [c.employeeNumber, c]));
   const lines = run.award?.lines ?? [];
   const reasons = new Map((run.award?.reserveReasons ?? []).map((r) => [r.crewId, r.text]));
-  const meanSatisfaction = lines.length ? lines.reduce((t, l) => t + l.satisfaction, 0) / lines.length : 0;
+  const points = lines.map((l) => ({ seniority: names.get(l.crewId)?.seniority ?? 0, satisfaction: l.satisfaction, name: names.get(l.crewId)?.name ?? l.crewId }));
+  const fairness = lines.length ? fairnessReport(points) : null;
   return (
     <section className="space-y-5">
       <div>
@@ -45,11 +48,13 @@ export default async function RunPage({ params }: { params: Promise<{ id: string
       {run.state === "cancelled" ? <p className="text-sm text-slate-700">The run was cancelled. Earlier runs and any published award are unchanged.</p> : null}
       {run.award ? (
         <>
-          <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+          <dl className="grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-6">
             {[
               ["Open positions", String(run.report?.openPositions ?? run.award.openPairings.reduce((t, o) => t + o.positionsOpen, 0))],
               ["Open time", hhmm(run.report?.openCreditMinutes ?? run.award.openPairings.reduce((t, o) => t + o.openCreditMinutes, 0))],
-              ["Mean satisfaction", meanSatisfaction.toFixed(2)],
+              ["Mean satisfaction", (fairness?.mean ?? 0).toFixed(2)],
+              ["Jain's index", (fairness?.jain ?? 0).toFixed(3)],
+              ["Gini coefficient", (fairness?.gini ?? 0).toFixed(3)],
               ["Reserve lines", String(lines.filter((l) => l.kind === "reserve").length)],
             ].map(([label, value]) => (
               <div key={label} className="rounded-lg border border-slate-200 bg-white p-3">
@@ -58,6 +63,10 @@ export default async function RunPage({ params }: { params: Promise<{ id: string
               </div>
             ))}
           </dl>
+          <div className="grid gap-3 md:grid-cols-2">
+            <SatisfactionHistogram satisfactions={lines.map((l) => l.satisfaction)} />
+            <SatisfactionBySeniority points={points} />
+          </div>
           {run.report?.warnings?.length ? (
             <ul className="list-disc pl-5 text-sm text-slate-700">
               {run.report.warnings.map((w) => (
