@@ -18,6 +18,7 @@ import { AppError, awardSchema, instanceSchema, sha256Hex, type Instance } from 
 import type { AwardResult, Progress } from "../award/index";
 import { AWARD_QUEUE, type AwardJob } from "../jobs/queue";
 import type { Prisma } from "./generated/client";
+import { fairnessReport as fairnessOf } from "../fairness/index";
 import { db } from "./client";
 
 /** A document as Prisma stores JSON: plain data, with non-finite numbers (an unproven bound's Infinity) as null. */
@@ -282,4 +283,52 @@ export async function runStatus(runId: string): Promise<RunSummary> {
 /** An audit entry for a scheduler's action on a run. */
 export async function auditRun(actorUserId: string, action: "award-run.requested" | "award-run.cancel", runId: string, detail: Record<string, string> = {}): Promise<void> {
   await db().auditEvent.create({ data: { actorUserId, action, entity: "AwardRun", entityId: runId, detail } });
+}
+
+/** Two finished runs of one award group side by side: the totals of each, and every crew member whose line differs. */
+export async function compareRuns(firstId: string, secondId: string) {
+  const load = async (id: string) => {
+    const run = await db().awardRun.findUnique({ where: { id }, select: { id: true, state: true, awardGroupId: true, createdAt: true, settings: true, award: true } });
+    if (!run) throw new AppError("not_found", `no award run ${id}`);
+    if (run.state !== "succeeded" || !run.award) throw new AppError("conflict", "only finished runs can be compared");
+    return { ...run, award: awardSchema.parse(run.award) };
+  };
+  const [a, b] = await Promise.all([load(firstId), load(secondId)]);
+  if (a.awardGroupId !== b.awardGroupId) throw new AppError("invalid", "the two runs are of different award groups: compare runs of one group");
+  const crew = await db().crewMember.findMany({
+    where: { employeeNumber: { in: [...new Set([...a.award.lines, ...b.award.lines].map((l) => l.crewId))] } },
+    select: { employeeNumber: true, name: true, seniority: true },
+  });
+  const who = new Map(crew.map((c) => [c.employeeNumber, c]));
+  const totals = (award: typeof a.award) => {
+    const sats = award.lines.map((l) => l.satisfaction);
+    const report = fairnessOf(award.lines.map((l) => ({ seniority: who.get(l.crewId)?.seniority ?? 0, satisfaction: l.satisfaction })));
+    return {
+      openPositions: award.openPairings.reduce((t, o) => t + o.positionsOpen, 0),
+      openCreditMinutes: award.openPairings.reduce((t, o) => t + o.openCreditMinutes, 0),
+      reserveLines: award.lines.filter((l) => l.kind === "reserve").length,
+      meanSatisfaction: sats.length ? sats.reduce((t, x) => t + x, 0) / sats.length : 0,
+      jain: report.jain,
+      gini: report.gini,
+    };
+  };
+  const byCrew = new Map(b.award.lines.map((l) => [l.crewId, l]));
+  const changed = a.award.lines.flatMap((l) => {
+    const other = byCrew.get(l.crewId);
+    if (other && other.kind === l.kind && other.pairings.join(" ") === l.pairings.join(" ")) return [];
+    const c = who.get(l.crewId);
+    return [{
+      crewId: l.crewId,
+      name: c?.name ?? l.crewId,
+      seniority: c?.seniority ?? 0,
+      first: { kind: l.kind, pairings: l.pairings, satisfaction: l.satisfaction },
+      second: other ? { kind: other.kind, pairings: other.pairings, satisfaction: other.satisfaction } : null,
+      satisfactionChange: (other?.satisfaction ?? 0) - l.satisfaction,
+    }];
+  });
+  return {
+    first: { id: a.id, createdAt: a.createdAt.toISOString(), totals: totals(a.award) },
+    second: { id: b.id, createdAt: b.createdAt.toISOString(), totals: totals(b.award) },
+    changed: changed.sort((x, y) => x.seniority - y.seniority),
+  };
 }

@@ -46,6 +46,10 @@ test("screenshots of publishing and of a published line", async ({ page }) => {
   await form.getByRole("button", { name: "Publish correction" }).click();
   await expect(form.getByRole("status")).toHaveText("January 2027 is already published with these runs; nothing was changed");
 
+  // The captains have two finished runs by now (planning-pages.screens.ts ran one): compare them.
+  await page.getByRole("region", { name: "Captains" }).getByRole("link", { name: "Compare with previous" }).click();
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("Compare runs");
+  await page.screenshot({ path: path.join(OUT, "compare-runs.png"), fullPage: true });
   await page.context().clearCookies();
   await page.setViewportSize({ width: 360, height: 780 });
   await signIn(page, "ines@larkfield.test");

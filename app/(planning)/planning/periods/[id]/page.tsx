@@ -76,6 +76,15 @@ export default async function PeriodPage({ params }: { params: Promise<{ id: str
                         </span>
                       </td>
                       <td className="py-1.5 text-right">
+                        {(() => {
+                          // Compare a finished run with the finished run before it.
+                          const earlier = r.state === "succeeded" ? g.runs.slice(g.runs.indexOf(r) + 1).find((x) => x.state === "succeeded") : undefined;
+                          return earlier ? (
+                            <Link href={`/planning/compare?first=${earlier.id}&second=${r.id}`} className="mr-3 text-sky-800 underline">
+                              Compare with previous
+                            </Link>
+                          ) : null;
+                        })()}
                         <Link href={`/planning/runs/${r.id}`} className="text-sky-800 underline">
                           Open
                         </Link>
