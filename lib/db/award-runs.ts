@@ -20,6 +20,7 @@ import { AWARD_QUEUE, type AwardJob } from "../jobs/queue";
 import type { Prisma } from "./generated/client";
 import { fairnessReport as fairnessOf } from "../fairness/index";
 import { db } from "./client";
+import { reviewRun } from "./run-review";
 
 /** A document as Prisma stores JSON: plain data, with non-finite numbers (an unproven bound's Infinity) as null. */
 const json = (value: unknown): Prisma.InputJsonValue =>
@@ -262,7 +263,7 @@ export async function periodRuns(periodId: string) {
 export async function runDetail(runId: string) {
   const run = await db().awardRun.findUnique({
     where: { id: runId },
-    select: { ...summarySelect, award: true, stats: true, instanceHash: true, awardGroup: { select: { position: true, bidPeriod: { select: { id: true, name: true, zone: true } } } } },
+    select: { ...summarySelect, award: true, stats: true, instance: true, instanceHash: true, awardGroup: { select: { position: true, bidPeriod: { select: { id: true, name: true, zone: true } } } } },
   });
   if (!run) throw new AppError("not_found", "no such award run");
   const award = run.award ? awardSchema.parse(run.award) : null;
@@ -270,7 +271,8 @@ export async function runDetail(runId: string) {
   const crew = award
     ? await db().crewMember.findMany({ where: { employeeNumber: { in: award.lines.map((l) => l.crewId) } }, select: { employeeNumber: true, name: true, seniority: true } })
     : [];
-  return { ...summary(run), instanceHash: run.instanceHash, position: run.awardGroup.position, period: run.awardGroup.bidPeriod, award, report, crew };
+  const review = award ? reviewRun(instanceSchema.parse(run.instance), award) : null;
+  return { ...summary(run), instanceHash: run.instanceHash, position: run.awardGroup.position, period: run.awardGroup.bidPeriod, award, report, crew, review };
 }
 
 /** What the progress bar polls: state, progress and error of one run. */

@@ -32,6 +32,9 @@ test("a scheduler runs the award, watches its progress and sees the lines", asyn
   await expect(page.getByRole("img", { name: "Histogram: crew members per satisfaction band" })).toBeVisible();
   await expect(page.getByRole("img", { name: "Scatter: satisfaction of each crew member by seniority place" }).locator("circle")).toHaveCount(6);
   await expect(page.getByText("Jain's index")).toBeVisible();
+  // Coverage by day and the legality re-check (lib/rules on every line of the run's own instance).
+  await expect(page.getByRole("grid", { name: "Open time by day of the period" }).getByRole("gridcell")).toHaveCount(31);
+  await expect(page.getByRole("region", { name: "Legality" })).toContainText("6 of 6 lines pass the rule set's checks.");
   // The period page lists the run as finished.
   await page.getByRole("link", { name: "January 2027" }).click();
   await expect(page.getByRole("region", { name: "Captains" }).getByText("Finished")).toBeVisible();

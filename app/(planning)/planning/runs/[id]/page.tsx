@@ -9,6 +9,7 @@ import { LegalityCaution } from "@/app/ui/legality-caution";
 import { elapsed, MODE_LABEL, POSITION_LABEL } from "../../run-labels";
 import { RunProgress } from "./run-progress";
 import { SatisfactionBySeniority, SatisfactionHistogram } from "./charts";
+import { CoverageCalendar } from "./coverage-calendar";
 import { fairnessReport } from "@/lib/fairness";
 
 export const metadata: Metadata = { title: "Award run" };
@@ -73,6 +74,43 @@ export default async function RunPage({ params }: { params: Promise<{ id: string
                 <li key={w}>{w}</li>
               ))}
             </ul>
+          ) : null}
+          <section aria-label="Coverage" className="grid gap-3 md:grid-cols-2">
+            {run.review ? <CoverageCalendar days={run.review.openByDay} /> : null}
+            <div className="rounded-lg border border-slate-200 bg-white p-3">
+              <h2 className="text-sm font-medium">Open trips</h2>
+              {run.award.openPairings.length === 0 ? (
+                <p className="mt-2 text-sm text-emerald-800">Every trip is covered.</p>
+              ) : (
+                <ul className="mt-2 divide-y divide-slate-100 text-sm">
+                  {run.award.openPairings.map((o) => (
+                    <li key={o.pairingId} className="flex justify-between py-1">
+                      <span className="font-mono">{o.pairingId}</span>
+                      <span className="tabular-nums text-slate-600">
+                        {o.positionsOpen} open · {hhmm(o.openCreditMinutes)}
+                      </span>
+                    </li>
+                  ))}
+                </ul>
+              )}
+            </div>
+          </section>
+          {run.review ? (
+            <section aria-label="Legality" className="rounded-lg border border-slate-200 bg-white p-3 text-sm">
+              <h2 className="font-medium">Legality, re-checked line by line</h2>
+              <p className={run.review.problems.length ? "text-red-800" : "text-emerald-800"}>
+                {run.review.legal} of {run.review.lines} lines pass the rule set&apos;s checks{run.review.problems.length ? "; these do not:" : "."}
+              </p>
+              {run.review.problems.length ? (
+                <ul className="mt-1 list-disc pl-5 text-red-800">
+                  {run.review.problems.map((p) => (
+                    <li key={p.crewId}>
+                      {names.get(p.crewId)?.name ?? p.crewId}: {p.texts.join("; ")}
+                    </li>
+                  ))}
+                </ul>
+              ) : null}
+            </section>
           ) : null}
           <LegalityCaution />
           <div className="overflow-x-auto rounded-lg border border-slate-200 bg-white">
