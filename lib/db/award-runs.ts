@@ -14,7 +14,7 @@
  *   published award is touched.
  */
 import type PgBoss from "pg-boss";
-import { AppError, awardSchema, instanceSchema, sha256Hex, type Instance } from "../domain/index";
+import { AppError, awardSchema, instanceSchema, sha256Hex, wishListSchema, type Instance } from "../domain/index";
 import type { AwardResult, Progress } from "../award/index";
 import { AWARD_QUEUE, type AwardJob } from "../jobs/queue";
 import type { Prisma } from "./generated/client";
@@ -47,10 +47,18 @@ export interface RunProgress {
  */
 export async function requestRun(
   boss: PgBoss,
-  input: { groupId: string; requestedById?: string | null; /** seconds the job outlives the time limit (tests shorten it) */ expiryMarginSeconds?: number },
+  input: {
+    groupId: string;
+    requestedById?: string | null;
+    /** a preview while bidding is open (crew see its verdict on their own wishes) */
+    preview?: boolean;
+    /** seconds the job outlives the time limit (tests shorten it) */
+    expiryMarginSeconds?: number;
+  },
 ): Promise<{ runId: string; instanceHash: string }> {
-  const group = await db().awardGroup.findUnique({ where: { id: input.groupId }, select: { id: true, bidPeriodId: true, position: true } });
+  const group = await db().awardGroup.findUnique({ where: { id: input.groupId }, select: { id: true, bidPeriodId: true, position: true, bidPeriod: { select: { state: true } } } });
   if (!group) throw new AppError("not_found", `no award group ${input.groupId}`);
+  if (input.preview && group.bidPeriod.state !== "open") throw new AppError("conflict", "a preview runs while bidding is open; once it is closed, run the award itself");
   const bundle = await exportPeriod(db(), group.bidPeriodId);
   const instance = bundle.instances.find((i) => i.group.position === group.position);
   if (!instance) throw new AppError("internal", `the export of period ${group.bidPeriodId} has no instance for ${group.position}`);
@@ -62,6 +70,7 @@ export async function requestRun(
       instance: json(instance),
       instanceHash,
       requestedById: input.requestedById ?? null,
+      preview: input.preview ?? false,
       progress: { phase: "queued", percent: 0, message: "Waiting for a worker", elapsedMs: 0 } satisfies RunProgress,
     },
   });
@@ -208,15 +217,16 @@ export interface RunSummary {
   cancelAsked: boolean;
   mode: string;
   timeLimitSeconds: number;
+  preview: boolean;
 }
 
 const summarySelect = {
-  id: true, state: true, progress: true, error: true, createdAt: true, finishedAt: true, settings: true, cancelRequestedAt: true,
+  id: true, state: true, progress: true, error: true, createdAt: true, finishedAt: true, settings: true, cancelRequestedAt: true, preview: true,
   requestedBy: { select: { name: true } },
 } as const;
 
 function summary(run: {
-  id: string; state: RunSummary["state"]; progress: unknown; error: string | null; createdAt: Date; finishedAt: Date | null; settings: unknown; cancelRequestedAt: Date | null;
+  id: string; state: RunSummary["state"]; progress: unknown; error: string | null; createdAt: Date; finishedAt: Date | null; settings: unknown; cancelRequestedAt: Date | null; preview: boolean;
   requestedBy: { name: string } | null;
 }): RunSummary {
   const settings = (run.settings ?? {}) as { mode?: string; timeLimitSeconds?: number };
@@ -232,6 +242,7 @@ function summary(run: {
     cancelAsked: run.cancelRequestedAt !== null,
     mode: settings.mode ?? "balanced",
     timeLimitSeconds: settings.timeLimitSeconds ?? 0,
+    preview: run.preview,
   };
 }
 
@@ -332,5 +343,32 @@ export async function compareRuns(firstId: string, secondId: string) {
     first: { id: a.id, createdAt: a.createdAt.toISOString(), totals: totals(a.award) },
     second: { id: b.id, createdAt: b.createdAt.toISOString(), totals: totals(b.award) },
     changed: changed.sort((x, y) => x.seniority - y.seniority),
+  };
+}
+
+/**
+ * What a crew member sees of the latest finished preview of their period:
+ * for each wish of the bid version the preview read (their last submitted
+ * one), whether its line grants it in full. Nothing about anyone else.
+ */
+export async function previewVerdict(crewMemberId: string, periodId: string) {
+  const member = await db().crewMember.findUnique({ where: { id: crewMemberId }, select: { employeeNumber: true, position: true } });
+  if (!member) return null;
+  const run = await db().awardRun.findFirst({
+    where: { preview: true, state: "succeeded", awardGroup: { bidPeriodId: periodId, position: member.position } },
+    orderBy: { createdAt: "desc" },
+    select: { createdAt: true, award: true, instance: true },
+  });
+  if (!run?.award) return null;
+  const award = awardSchema.parse(run.award);
+  const line = award.lines.find((l) => l.crewId === member.employeeNumber);
+  const bids = (run.instance as { bids?: Record<string, unknown> }).bids ?? {};
+  const wishes = wishListSchema.safeParse(bids[member.employeeNumber] ?? []);
+  if (!line || !wishes.success) return null;
+  const granted = new Set(line.grantedWishes);
+  return {
+    at: run.createdAt.toISOString(),
+    kind: line.kind,
+    wishes: wishes.data.map((wish, rank) => ({ rank, wish, granted: granted.has(rank) })),
   };
 }

@@ -37,9 +37,10 @@ export async function publishPeriod(input: { periodId: string; runs: Record<stri
       const label = POSITION[group.position];
       const runId = input.runs[group.id];
       if (!runId) throw new AppError("invalid", `choose a finished run for the ${label} before publishing`);
-      const run = await tx.awardRun.findUnique({ where: { id: runId }, select: { awardGroupId: true, state: true, instanceHash: true } });
+      const run = await tx.awardRun.findUnique({ where: { id: runId }, select: { awardGroupId: true, state: true, instanceHash: true, preview: true } });
       if (!run || run.awardGroupId !== group.id) throw new AppError("invalid", `the run chosen for the ${label} is not one of theirs`);
       if (run.state !== "succeeded") throw new AppError("conflict", `the run chosen for the ${label} has not finished`);
+      if (run.preview) throw new AppError("conflict", `the run chosen for the ${label} is a preview: run the award itself to publish`);
       const instance = bundle.instances.find((i) => i.group.position === group.position);
       if (!instance || sha256Hex(instance) !== run.instanceHash) {
         throw new AppError("conflict", `the run chosen for the ${label} is stale: the period's bids, trips or crew changed after it ran; run the award again`);

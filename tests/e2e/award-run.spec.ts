@@ -3,8 +3,8 @@ import pg from "pg";
 import { E2E_DATABASE_FILE } from "./constants.ts";
 import { expect, signIn, test } from "./helpers.ts";
 
-// A scheduler runs the award for one group and watches the progress bar reach 100 %.
-test("a scheduler runs the award, watches its progress and sees the lines", async ({ page }) => {
+// While bidding is open, a scheduler runs a preview for one group and watches the progress bar reach 100 %.
+test("a scheduler runs a preview, watches its progress and sees the lines", async ({ page }) => {
   test.setTimeout(120_000);
   const { url } = JSON.parse(fs.readFileSync(E2E_DATABASE_FILE, "utf8")) as { url: string };
   const client = new pg.Client({ connectionString: url });
@@ -17,7 +17,7 @@ test("a scheduler runs the award, watches its progress and sees the lines", asyn
   }
   await signIn(page, "planning@larkfield.test");
   await page.getByRole("link", { name: "January 2027" }).click();
-  await page.getByRole("button", { name: "Run award: Captains" }).click();
+  await page.getByRole("button", { name: "Run preview: Captains" }).click();
   await expect(page).toHaveURL(/\/planning\/runs\//);
   const bar = page.getByRole("progressbar", { name: "Award run progress" });
   await expect(bar).toBeVisible();
@@ -38,4 +38,5 @@ test("a scheduler runs the award, watches its progress and sees the lines", asyn
   // The period page lists the run as finished.
   await page.getByRole("link", { name: "January 2027" }).click();
   await expect(page.getByRole("region", { name: "Captains" }).getByText("Finished")).toBeVisible();
+  await expect(page.getByRole("region", { name: "Captains" }).getByText("Strict seniority · preview")).toBeVisible();
 });

@@ -20,7 +20,7 @@ test("laptop and phone screenshots of the period page and an award run", async (
   await expect(page.getByRole("heading", { level: 1 })).toHaveText("January 2027");
   await page.evaluate(() => window.scrollTo(0, 0));
   await page.screenshot({ path: path.join(OUT, "period-page.png"), fullPage: true });
-  await page.getByRole("button", { name: "Run award: Captains" }).click();
+  await page.getByRole("button", { name: "Run preview: Captains" }).click();
   const bar = page.getByRole("progressbar", { name: "Award run progress" });
   await expect(bar).not.toHaveAttribute("aria-valuenow", "0", { timeout: 30_000 });
   await page.screenshot({ path: path.join(OUT, "run-progress.png") });
@@ -31,4 +31,11 @@ test("laptop and phone screenshots of the period page and an award run", async (
   await page.setViewportSize({ width: 360, height: 780 });
   await page.evaluate(() => window.scrollTo(0, 0));
   await page.screenshot({ path: path.join(OUT, "run-finished-phone.png"), fullPage: true });
+  // The preview's verdict on a crew member's own wishes (Ines submitted a bid in crew-pages.screens.ts).
+  await page.context().clearCookies();
+  await signIn(page, "ines@larkfield.test");
+  await expect(page).toHaveURL(/\/trips$/);
+  await page.goto("/bid");
+  await expect(page.getByRole("region", { name: "Preview of the award" })).toBeVisible();
+  await page.screenshot({ path: path.join(OUT, "bid-preview-verdict.png") });
 });

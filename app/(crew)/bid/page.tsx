@@ -5,6 +5,8 @@ import { now } from "@/lib/clock";
 import { isAppError, localDateTimeLabel } from "@/lib/domain/index";
 import { BidEditor } from "./bid-editor";
 import { Countdown } from "./countdown";
+import { PreviewVerdict } from "./preview-verdict";
+import { previewVerdict } from "@/lib/db/award-runs";
 
 export const metadata: Metadata = { title: "My bid" };
 
@@ -26,7 +28,11 @@ export default async function BidPage({ searchParams }: { searchParams: Promise<
   const at = now();
   const deadline = scope.period.deadline.toISOString();
   const closed = scope.period.state !== "open" || at.getTime() >= scope.period.deadline.getTime();
-  const [previous, tripCodes] = await Promise.all([previousBid(scope), periodTripCodes(scope)]);
+  const [previous, tripCodes, verdict] = await Promise.all([
+    previousBid(scope),
+    periodTripCodes(scope),
+    user.crewMemberId ? previewVerdict(user.crewMemberId, scope.period.id) : Promise.resolve(null),
+  ]);
   const { added, wish } = await searchParams;
   // ?wish=N: wish N was just made from the trip list's filters.
   const madeRank = Number(wish);
@@ -37,6 +43,7 @@ export default async function BidPage({ searchParams }: { searchParams: Promise<
       <div className="mt-2">
         <Countdown deadline={deadline} serverNow={at.toISOString()} label={localDateTimeLabel(deadline, scope.period.zone)} />
       </div>
+      {verdict ? <PreviewVerdict verdict={verdict} zone={scope.period.zone} /> : null}
       <p className="mt-2 text-sm text-slate-700">Most wanted first. Changes save by themselves; only Submit makes a version the award reads.</p>
       <BidEditor
         periodId={scope.period.id}

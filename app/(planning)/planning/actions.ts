@@ -24,8 +24,9 @@ export async function runAwardAction(_previous: ActionOutcome, form: FormData): 
   if (!groupId.success) return { status: "refused", message: "The request named no award group; nothing was queued." };
   let runId: string;
   try {
-    ({ runId } = await requestRun(await queueSender(databaseUrl()), { groupId: groupId.data, requestedById: user.id }));
-    await auditRun(user.id, "award-run.requested", runId, { groupId: groupId.data });
+    const preview = form.get("preview") === "yes";
+    ({ runId } = await requestRun(await queueSender(databaseUrl()), { groupId: groupId.data, requestedById: user.id, preview }));
+    await auditRun(user.id, "award-run.requested", runId, { groupId: groupId.data, preview: String(preview) });
   } catch (error) {
     return { status: "refused", message: errorMessage(error) };
   }

@@ -14,11 +14,12 @@ function Submit({ label }: { label: string }) {
 }
 
 /** "Run award" for one award group; a refusal is shown beside the button. */
-export function RunAwardButton({ groupId, label }: { groupId: string; label: string }) {
+export function RunAwardButton({ groupId, label, preview = false }: { groupId: string; label: string; preview?: boolean }) {
   const [outcome, action] = useActionState(runAwardAction, undefined);
   return (
     <form action={action} className="flex flex-wrap items-center gap-3">
       <input type="hidden" name="groupId" value={groupId} />
+      {preview ? <input type="hidden" name="preview" value="yes" /> : null}
       <Submit label={label} />
       {outcome?.status === "refused" ? (
         <p role="alert" className="text-sm text-red-700">

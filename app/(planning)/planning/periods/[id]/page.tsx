@@ -46,7 +46,11 @@ export default async function PeriodPage({ params }: { params: Promise<{ id: str
                 {MODE_LABEL[g.mode] ?? g.mode} · time limit {elapsed(g.timeLimitSeconds * 1000)}
               </p>
             </div>
-            <RunAwardButton groupId={g.id} label={`Run award: ${POSITION_LABEL[g.position] ?? g.position}`} />
+            {period.state === "open" ? (
+              <RunAwardButton groupId={g.id} preview label={`Run preview: ${POSITION_LABEL[g.position] ?? g.position}`} />
+            ) : (
+              <RunAwardButton groupId={g.id} label={`Run award: ${POSITION_LABEL[g.position] ?? g.position}`} />
+            )}
           </div>
           {g.runs.length === 0 ? (
             <p className="mt-3 text-sm text-slate-600">No runs yet.</p>
@@ -67,7 +71,10 @@ export default async function PeriodPage({ params }: { params: Promise<{ id: str
                     <tr key={r.id} className="border-t border-slate-100">
                       <td className="py-1.5 pr-3">{zonedDateTime(r.createdAt, period.zone)}</td>
                       <td className="py-1.5 pr-3">{r.requestedBy ?? "—"}</td>
-                      <td className="py-1.5 pr-3">{MODE_LABEL[r.mode] ?? r.mode}</td>
+                      <td className="py-1.5 pr-3">
+                        {MODE_LABEL[r.mode] ?? r.mode}
+                        {r.preview ? " · preview" : ""}
+                      </td>
                       <td className="py-1.5 pr-3">
                         {r.id === g.chosenRunId ? <span className="mr-1 rounded bg-indigo-50 px-2 py-0.5 text-xs font-medium text-indigo-800">Published</span> : null}
                         <span className={`rounded px-2 py-0.5 text-xs font-medium ${STATE_STYLE[r.state] ?? ""}`}>
@@ -106,7 +113,7 @@ export default async function PeriodPage({ params }: { params: Promise<{ id: str
             label: POSITION_LABEL[g.position] ?? g.position,
             chosenRunId: g.chosenRunId,
             runs: g.runs
-              .filter((r) => r.state === "succeeded")
+              .filter((r) => r.state === "succeeded" && !r.preview)
               .map((r) => ({ id: r.id, label: `${zonedDateTime(r.createdAt, period.zone)} · ${MODE_LABEL[r.mode] ?? r.mode}${r.id === g.chosenRunId ? " · published" : ""}` })),
           }))}
         />

@@ -1,0 +1,2 @@
+-- AlterTable
+ALTER TABLE "AwardRun" ADD COLUMN     "preview" BOOLEAN NOT NULL DEFAULT false;
