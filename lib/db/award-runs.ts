@@ -85,19 +85,21 @@ export async function requestRun(
 }
 
 /** What a claim found: the run's instance, now this worker's; a run finished or gone; a run a live worker holds. */
-export type Claim = { kind: "claimed"; instance: Instance } | { kind: "gone" } | { kind: "held"; leaseUntil: Date };
+export type Claim = { kind: "claimed"; instance: Instance; claim: Date } | { kind: "gone" } | { kind: "held"; leaseUntil: Date };
 
 /**
  * Takes a run for this worker. The run row is the lock, so a retried job
  * (pg-boss may retry beside a slow original) never runs a run twice at once:
  * a queued run is taken, and so is a running one whose lease has lapsed (its
  * worker died); a run held by a live worker is "held"; a finished, cancelled
- * or missing run is "gone".
+ * or missing run is "gone". The claim's start time (`startedAt`) is the
+ * holder's token: heartbeats, results and closing by a worker name it, so a
+ * worker whose run was taken over writes nothing more.
  */
 export async function claimRun(runId: string, now = new Date()): Promise<Claim> {
   const leaseUntil = new Date(now.getTime() + LEASE_SECONDS * 1000);
   const { count } = await db().awardRun.updateMany({
-    where: { id: runId, OR: [{ state: "queued" }, { state: "running", leaseUntil: { lt: now } }] },
+    where: { id: runId, cancelRequestedAt: null, OR: [{ state: "queued" }, { state: "running", leaseUntil: { lt: now } }] },
     data: {
       state: "running",
       startedAt: now,
@@ -105,9 +107,11 @@ export async function claimRun(runId: string, now = new Date()): Promise<Claim> 
       progress: { phase: "starting", percent: 0, message: "Starting", elapsedMs: 0 } satisfies RunProgress,
     },
   });
-  const run = await db().awardRun.findUnique({ where: { id: runId }, select: { instance: true, state: true, leaseUntil: true } });
-  if (count === 1 && run) return { kind: "claimed", instance: instanceSchema.parse(run.instance) };
-  if (run?.state === "running" && run.leaseUntil) return { kind: "held", leaseUntil: run.leaseUntil };
+  const run = await db().awardRun.findUnique({ where: { id: runId }, select: { instance: true, state: true, leaseUntil: true, cancelRequestedAt: true } });
+  if (count === 1 && run) return { kind: "claimed", instance: instanceSchema.parse(run.instance), claim: now };
+  if (run?.state === "running" && run.leaseUntil && run.leaseUntil >= now) return { kind: "held", leaseUntil: run.leaseUntil };
+  // A run whose worker died after "Cancel" was pressed ends as cancelled, not run again.
+  if (run?.state === "running") await db().awardRun.updateMany({ where: { id: runId, state: "running", leaseUntil: { lt: now } }, data: { state: "cancelled", finishedAt: now, leaseUntil: null } });
   return { kind: "gone" };
 }
 
@@ -115,9 +119,9 @@ export async function claimRun(runId: string, now = new Date()): Promise<Claim> 
  * Stores progress (when given) and renews the lease. Returns whether the run
  * should stop: cancel was asked for, or the run is no longer this worker's.
  */
-export async function heartbeat(runId: string, progress?: RunProgress, now = new Date()): Promise<{ stop: boolean }> {
+export async function heartbeat(runId: string, claim: Date, progress?: RunProgress, now = new Date()): Promise<{ stop: boolean }> {
   const { count } = await db().awardRun.updateMany({
-    where: { id: runId, state: "running" },
+    where: { id: runId, state: "running", startedAt: claim },
     data: { leaseUntil: new Date(now.getTime() + LEASE_SECONDS * 1000), ...(progress ? { progress: { ...progress } } : {}) },
   });
   if (count !== 1) return { stop: true };
@@ -131,11 +135,11 @@ export async function heartbeat(runId: string, progress?: RunProgress, now = new
  * Does nothing (and returns false) when the run is no longer running — it was
  * cancelled, or another worker holds it.
  */
-export async function finishRun(runId: string, result: AwardResult, elapsedMs: number): Promise<boolean> {
+export async function finishRun(runId: string, claim: Date, result: AwardResult, elapsedMs: number): Promise<boolean> {
   const award = awardSchema.parse(result.award);
   return db().$transaction(async (tx) => {
-    const run = await tx.awardRun.findUnique({ where: { id: runId }, select: { state: true, awardGroup: { select: { bidPeriod: { select: { baseId: true } } } } } });
-    if (!run || run.state !== "running") return false;
+    const run = await tx.awardRun.findUnique({ where: { id: runId }, select: { state: true, startedAt: true } });
+    if (!run || run.state !== "running" || run.startedAt?.getTime() !== claim.getTime()) return false;
     const crew = await tx.crewMember.findMany({
       where: { employeeNumber: { in: award.lines.map((l) => l.crewId) } },
       select: { id: true, employeeNumber: true },
@@ -174,18 +178,18 @@ export async function finishRun(runId: string, result: AwardResult, elapsedMs: n
   });
 }
 
-/** Closes a running run as failed with a message saying why (a finished run is left as it is). */
-export async function failRun(runId: string, message: string): Promise<void> {
+/** Closes a queued or running run as failed with a message saying why (a finished run, or one another worker holds, is left as it is). */
+export async function failRun(runId: string, message: string, claim?: Date): Promise<void> {
   await db().awardRun.updateMany({
-    where: { id: runId, state: { in: ["queued", "running"] } },
+    where: { id: runId, state: { in: ["queued", "running"] }, ...(claim ? { startedAt: claim } : {}) },
     data: { state: "failed", error: message, finishedAt: new Date(), leaseUntil: null },
   });
 }
 
-/** Closes a run the worker stopped on request as cancelled. */
-export async function markCancelled(runId: string): Promise<void> {
+/** Closes a run its worker stopped on request as cancelled. */
+export async function markCancelled(runId: string, claim: Date): Promise<void> {
   await db().awardRun.updateMany({
-    where: { id: runId, state: { in: ["queued", "running"] } },
+    where: { id: runId, state: "running", startedAt: claim, cancelRequestedAt: { not: null } },
     data: { state: "cancelled", finishedAt: new Date(), leaseUntil: null },
   });
 }

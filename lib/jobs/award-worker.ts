@@ -42,7 +42,7 @@ export async function workRun(runId: string, log: (l: string) => void, options: 
   }
   // A live worker holds it: fail this job, so pg-boss retries it later in case that worker dies too.
   if (claim.kind === "held") throw new Error(`award run ${runId} is held by a live worker`);
-  const { instance } = claim;
+  const { instance, claim: token } = claim;
   const started = performance.now();
   let latest: RunProgress = { phase: "starting", percent: 0, message: "Starting", elapsedMs: 0 };
   let changed = false;
@@ -50,7 +50,7 @@ export async function workRun(runId: string, log: (l: string) => void, options: 
   let beating = Promise.resolve();
   const beat = () => {
     beating = beating.then(async () => {
-      const { stop } = await heartbeat(runId, changed ? { ...latest, elapsedMs: Math.round(performance.now() - started) } : undefined);
+      const { stop } = await heartbeat(runId, token, changed ? { ...latest, elapsedMs: Math.round(performance.now() - started) } : undefined);
       changed = false;
       if (stop && !controller.signal.aborted) {
         log(`award run ${runId}: stopping (cancel asked, or the run is no longer ours)`);
@@ -69,17 +69,17 @@ export async function workRun(runId: string, log: (l: string) => void, options: 
     });
     clearInterval(timer);
     await beating;
-    const written = await finishRun(runId, result, Math.round(performance.now() - started));
+    const written = await finishRun(runId, token, result, Math.round(performance.now() - started));
     log(`award run ${runId}: ${written ? "results written" : "finished, but the run was no longer ours: results dropped"}`);
   } catch (e) {
     clearInterval(timer);
     await beating;
     if (controller.signal.aborted && isAppError(e, "conflict")) {
-      await markCancelled(runId);
-      log(`award run ${runId}: cancelled`);
+      await markCancelled(runId, token);
+      log(`award run ${runId}: stopped (cancelled, or taken over by another worker)`);
     } else {
       const message = e instanceof Error ? e.message : String(e);
-      await failRun(runId, message);
+      await failRun(runId, message, token);
       log(`award run ${runId}: failed: ${message}`);
     }
   }

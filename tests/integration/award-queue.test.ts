@@ -7,7 +7,7 @@
 import type PgBoss from "pg-boss";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { awardSchema, sha256Hex } from "@/lib/domain";
-import { cancelRun, claimRun, markCancelled, requestRun } from "@/lib/db/award-runs";
+import { cancelRun, claimRun, failRun, heartbeat, requestRun } from "@/lib/db/award-runs";
 import { db } from "@/lib/db/client";
 import { startAwardWorker } from "@/lib/jobs/award-worker";
 import { AWARD_QUEUE, startQueue } from "@/lib/jobs/queue";
@@ -34,7 +34,23 @@ describe("the award job", { timeout: 180_000 }, () => {
     const claims = await Promise.all([claimRun(runId), claimRun(runId), claimRun(runId)]);
     expect(claims.map((c) => c.kind).sort()).toEqual(["claimed", "held", "held"]);
     expect((await db().awardRun.findUniqueOrThrow({ where: { id: runId } })).state).toBe("running");
-    await markCancelled(runId); // its job then finds nothing to do
+    // The holder's lease lapses (its worker died): another claimer takes over, and the first one's
+    // heartbeats and closing no longer touch the run.
+    const first = claims.find((c) => c.kind === "claimed")!;
+    if (first.kind !== "claimed") throw new Error("unreachable");
+    await db().awardRun.update({ where: { id: runId }, data: { leaseUntil: new Date(Date.now() - 1000) } });
+    const second = await claimRun(runId);
+    expect(second.kind).toBe("claimed");
+    if (second.kind !== "claimed") throw new Error("unreachable");
+    expect(await heartbeat(runId, first.claim)).toEqual({ stop: true });
+    await failRun(runId, "the first worker's late failure", first.claim);
+    expect((await db().awardRun.findUniqueOrThrow({ where: { id: runId } })).state).toBe("running");
+    expect(await heartbeat(runId, second.claim)).toEqual({ stop: false });
+    // "Cancel" on the running run; once its worker's lease lapses, a retried job closes it as cancelled instead of running it.
+    expect(await cancelRun(runId)).toBe("stopping");
+    await db().awardRun.update({ where: { id: runId }, data: { leaseUntil: new Date(Date.now() - 1000) } });
+    expect((await claimRun(runId)).kind).toBe("gone");
+    expect((await db().awardRun.findUniqueOrThrow({ where: { id: runId } })).state).toBe("cancelled");
   });
 
   let firstRun = "";
