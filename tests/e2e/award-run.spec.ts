@@ -1,20 +1,11 @@
-import fs from "node:fs";
-import pg from "pg";
-import { E2E_DATABASE_FILE } from "./constants.ts";
 import { expect, signIn, test } from "./helpers.ts";
+import { setTimeLimit } from "./planning-steps.ts";
 
 // While bidding is open, a scheduler runs a preview for one group and watches the progress bar reach 100 %.
 test("a scheduler runs a preview, watches its progress and sees the lines", async ({ page }) => {
   test.setTimeout(120_000);
-  const { url } = JSON.parse(fs.readFileSync(E2E_DATABASE_FILE, "utf8")) as { url: string };
-  const client = new pg.Client({ connectionString: url });
-  await client.connect();
-  try {
-    // A short time limit for the captains' group, so the run ends within the test.
-    await client.query(`UPDATE "AwardGroup" SET settings = jsonb_set(settings::jsonb, '{timeLimitSeconds}', '8') WHERE position = 'captain'`);
-  } finally {
-    await client.end();
-  }
+  // A short time limit for the captains' group, so the run ends within the test.
+  await setTimeLimit(8, "captain");
   await signIn(page, "planning@larkfield.test");
   await page.getByRole("link", { name: "January 2027" }).click();
   await page.getByRole("button", { name: "Run preview: Captains" }).click();

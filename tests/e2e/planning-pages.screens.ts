@@ -1,19 +1,14 @@
-import fs from "node:fs";
 import path from "node:path";
-import pg from "pg";
-import { E2E_DATABASE_FILE } from "./constants.ts";
 import { expect, signIn, test } from "./helpers.ts";
+import { setTimeLimit } from "./planning-steps.ts";
 
 const OUT = path.resolve(import.meta.dirname, "../../docs/screens");
 
 // Planning is laptop work: a laptop-sized window, and the run page on a phone as well.
 test("laptop and phone screenshots of the period page and an award run", async ({ page }) => {
   test.setTimeout(120_000);
-  const { url } = JSON.parse(fs.readFileSync(E2E_DATABASE_FILE, "utf8")) as { url: string };
-  const client = new pg.Client({ connectionString: url });
-  await client.connect();
-  await client.query(`UPDATE "AwardGroup" SET settings = jsonb_set(settings::jsonb, '{timeLimitSeconds}', '12') WHERE position = 'captain'`);
-  await client.end();
+  // A short time limit for the captains' group, so the run ends within the test.
+  await setTimeLimit(12, "captain");
   await page.setViewportSize({ width: 1280, height: 800 });
   await signIn(page, "planning@larkfield.test");
   await page.getByRole("link", { name: "January 2027" }).click();

@@ -1,35 +1,11 @@
-import fs from "node:fs";
-import pg from "pg";
-import { E2E_DATABASE_FILE } from "./constants.ts";
 import { expect, signIn, test } from "./helpers.ts";
+import { closeAndRunBothGroups, setTimeLimit } from "./planning-steps.ts";
 
 // Runs after the bid specs (it closes bidding): a scheduler runs both groups, publishes, and a captain sees their line.
 test("a scheduler publishes the award and a crew member sees their line", async ({ page }) => {
   test.setTimeout(180_000);
-  const { url } = JSON.parse(fs.readFileSync(E2E_DATABASE_FILE, "utf8")) as { url: string };
-  const client = new pg.Client({ connectionString: url });
-  await client.connect();
-  try {
-    await client.query(`UPDATE "AwardGroup" SET settings = jsonb_set(settings::jsonb, '{timeLimitSeconds}', '6')`);
-  } finally {
-    await client.end();
-  }
-  await signIn(page, "planning@larkfield.test");
-  await expect(page).toHaveURL(/\/planning$/);
-  // Before the deadline (the server's clock starts on 1 December), closing is "close early", confirmed.
-  await page.getByRole("link", { name: "January 2027" }).click();
-  const close = page.getByRole("form", { name: "Close bidding early" });
-  await close.getByRole("checkbox").check();
-  await close.getByRole("button", { name: "Close bidding early" }).click();
-  await expect(page.getByText("State: closed")).toBeVisible();
-  for (const group of ["Captains", "First officers"]) {
-    await page.goto("/planning");
-    await page.getByRole("link", { name: "January 2027" }).click();
-    await page.getByRole("button", { name: `Run award: ${group}` }).click();
-    await expect(page.getByRole("progressbar", { name: "Award run progress" })).toHaveAttribute("aria-valuenow", "100", { timeout: 90_000 });
-  }
-  await page.goto("/planning");
-  await page.getByRole("link", { name: "January 2027" }).click();
+  await setTimeLimit(6);
+  await closeAndRunBothGroups(page);
   const form = page.getByRole("form", { name: "Publish" });
   // Without the review confirmed the browser refuses the form; with it, the award is published.
   await form.getByRole("checkbox").check();
