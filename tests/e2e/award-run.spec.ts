@@ -1,3 +1,4 @@
+import { bundleSchema } from "../../lib/domain/index.ts";
 import { expect, signIn, test } from "./helpers.ts";
 import { setTimeLimit } from "./planning-steps.ts";
 
@@ -8,6 +9,13 @@ test("a scheduler runs a preview, watches its progress and sees the lines", asyn
   await setTimeLimit(8, "captain");
   await signIn(page, "planning@larkfield.test");
   await page.getByRole("link", { name: "January 2027" }).click();
+  // The period exports as the engine's bundle: one instance per award group, as a download.
+  const href = await page.getByRole("link", { name: "Export as JSON" }).getAttribute("href");
+  const exported = await page.request.get(href!);
+  expect(exported.headers()["content-disposition"]).toBe('attachment; filename="january-2027-hlv.json"');
+  const bundle = bundleSchema.parse(await exported.json());
+  expect(bundle.period.name).toBe("January 2027");
+  expect(bundle.instances.map((i) => i.group.position).sort()).toEqual(["captain", "first_officer"]);
   await page.getByRole("button", { name: "Run preview: Captains" }).click();
   await expect(page).toHaveURL(/\/planning\/runs\//);
   const bar = page.getByRole("progressbar", { name: "Award run progress" });

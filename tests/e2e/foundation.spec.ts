@@ -40,6 +40,9 @@ test("a crew member cannot open a planning page", async ({ page }) => {
   await expect(page).toHaveURL(/\/not-allowed$/);
   await expect(page.getByRole("heading", { level: 1 })).toHaveText("This page is not open to your account");
   await expect(page.getByText("Bid periods")).toHaveCount(0);
+  // Nor the planning data behind the pages: a run's progress or a period's export.
+  expect((await page.request.get("/api/runs/any")).status()).toBe(403);
+  expect((await page.request.get("/api/periods/any/export")).status()).toBe(403);
 });
 
 test("signing out ends the session", async ({ page }) => {

@@ -30,7 +30,10 @@ export default async function PeriodPage({ params }: { params: Promise<{ id: str
         </p>
         <h1 className="text-xl font-semibold">{period.name}</h1>
         <p className="text-sm text-slate-600">
-          State: {period.state} · bids close {zonedDateTime(period.deadline, period.zone)} · times in {period.zone}
+          State: {period.state} · bids close {zonedDateTime(period.deadline, period.zone)} · times in {period.zone} ·{" "}
+          <a href={`/api/periods/${period.id}/export`} className="text-sky-800 underline">
+            Export as JSON
+          </a>
         </p>
       </div>
       <section aria-label="Bidding" className="rounded-lg border border-slate-200 bg-white p-4">
