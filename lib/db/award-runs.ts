@@ -318,13 +318,12 @@ export async function compareRuns(firstId: string, secondId: string) {
   });
   const who = new Map(crew.map((c) => [c.employeeNumber, c]));
   const totals = (award: typeof a.award) => {
-    const sats = award.lines.map((l) => l.satisfaction);
     const report = fairnessOf(award.lines.map((l) => ({ seniority: who.get(l.crewId)?.seniority ?? 0, satisfaction: l.satisfaction })));
     return {
       openPositions: award.openPairings.reduce((t, o) => t + o.positionsOpen, 0),
       openCreditMinutes: award.openPairings.reduce((t, o) => t + o.openCreditMinutes, 0),
       reserveLines: award.lines.filter((l) => l.kind === "reserve").length,
-      meanSatisfaction: sats.length ? sats.reduce((t, x) => t + x, 0) / sats.length : 0,
+      meanSatisfaction: report.mean,
       jain: report.jain,
       gini: report.gini,
     };

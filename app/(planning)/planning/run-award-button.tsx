@@ -3,6 +3,7 @@
 import { useActionState } from "react";
 import { useFormStatus } from "react-dom";
 import { runAwardAction } from "./actions";
+import { ActionMessage } from "./action-message";
 
 function Submit({ label }: { label: string }) {
   const { pending } = useFormStatus();
@@ -21,11 +22,7 @@ export function RunAwardButton({ groupId, label, preview = false }: { groupId: s
       <input type="hidden" name="groupId" value={groupId} />
       {preview ? <input type="hidden" name="preview" value="yes" /> : null}
       <Submit label={label} />
-      {outcome?.status === "refused" ? (
-        <p role="alert" className="text-sm text-red-700">
-          {outcome.message}
-        </p>
-      ) : null}
+      <ActionMessage state={outcome} />
     </form>
   );
 }

@@ -2,6 +2,7 @@
 
 import { useActionState } from "react";
 import { biddingStepAction } from "../../actions";
+import { ActionMessage } from "../../action-message";
 
 /** One step of the bidding window: a confirmation to tick, then the button. */
 function Step({ periodId, step, label, confirm, children }: { periodId: string; step: "open" | "extend" | "close"; label: string; confirm: string; children?: React.ReactNode }) {
@@ -18,11 +19,7 @@ function Step({ periodId, step, label, confirm, children }: { periodId: string; 
       <button type="submit" disabled={pending} className="rounded-md bg-slate-900 px-3 py-1.5 text-sm font-semibold text-white hover:bg-slate-700 disabled:opacity-60">
         {label}
       </button>
-      {state ? (
-        <p role={state.status === "refused" ? "alert" : "status"} className={`text-sm ${state.status === "refused" ? "text-red-700" : "text-emerald-800"}`}>
-          {state.message}
-        </p>
-      ) : null}
+      <ActionMessage state={state} />
     </form>
   );
 }

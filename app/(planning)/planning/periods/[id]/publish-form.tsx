@@ -2,6 +2,7 @@
 
 import { useActionState } from "react";
 import { publishAction } from "../../actions";
+import { ActionMessage } from "../../action-message";
 
 export interface PublishChoice {
   groupId: string;
@@ -39,11 +40,7 @@ export function PublishForm({ periodId, groups, published }: { periodId: string;
       <button type="submit" disabled={!ready || pending} className="rounded-md bg-slate-900 px-4 py-2 text-sm font-semibold text-white hover:bg-slate-700 disabled:opacity-60">
         {pending ? "Publishing…" : published ? "Publish correction" : "Publish award"}
       </button>
-      {state ? (
-        <p role={state.status === "refused" ? "alert" : "status"} className={`text-sm ${state.status === "refused" ? "text-red-700" : "text-emerald-800"}`}>
-          {state.message}
-        </p>
-      ) : null}
+      <ActionMessage state={state} />
     </form>
   );
 }
