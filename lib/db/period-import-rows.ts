@@ -46,25 +46,33 @@ export interface ImportPlan {
   submissions: Prisma.BidSubmissionCreateManyInput[];
 }
 
-function addPairing(plan: ImportPlan, pairing: Bundle["instances"][number]["pairings"][number], periodId: string): void {
+/** A pairing's rows: the Pairing row, its duty periods and their legs, with ids made here. */
+export function pairingRows(
+  pairing: Bundle["instances"][number]["pairings"][number],
+  periodId: string,
+): { pairing: Prisma.PairingCreateManyInput & { id: string }; dutyPeriods: DutyPeriodRow[]; legs: LegRow[] } {
   const pairingId = randomUUID();
-  plan.pairings.push({
-    id: pairingId,
-    bidPeriodId: periodId,
-    code: pairing.id,
-    startsAt: new Date(pairing.dutyPeriods[0]!.report),
-    endsAt: new Date(pairing.dutyPeriods.at(-1)!.release),
-    blockMinutes: pairing.blockMinutes,
-    creditMinutes: pairing.creditMinutes,
-    tafbMinutes: pairing.tafbMinutes,
-    crewNeeded: json(pairing.crewNeeded),
-    requires: pairing.requires,
-  });
+  const out = {
+    pairing: {
+      id: pairingId,
+      bidPeriodId: periodId,
+      code: pairing.id,
+      startsAt: new Date(pairing.dutyPeriods[0]!.report),
+      endsAt: new Date(pairing.dutyPeriods.at(-1)!.release),
+      blockMinutes: pairing.blockMinutes,
+      creditMinutes: pairing.creditMinutes,
+      tafbMinutes: pairing.tafbMinutes,
+      crewNeeded: json(pairing.crewNeeded),
+      requires: pairing.requires,
+    },
+    dutyPeriods: [] as DutyPeriodRow[],
+    legs: [] as LegRow[],
+  };
   pairing.dutyPeriods.forEach((duty, seq) => {
     const dutyPeriodId = randomUUID();
-    plan.dutyPeriods.push({ id: dutyPeriodId, pairingId, seq, reportAt: new Date(duty.report), releaseAt: new Date(duty.release) });
+    out.dutyPeriods.push({ id: dutyPeriodId, pairingId, seq, reportAt: new Date(duty.report), releaseAt: new Date(duty.release) });
     duty.legs.forEach((leg, legSeq) =>
-      plan.legs.push({
+      out.legs.push({
         id: randomUUID(),
         dutyPeriodId,
         seq: legSeq,
@@ -79,6 +87,14 @@ function addPairing(plan: ImportPlan, pairing: Bundle["instances"][number]["pair
       }),
     );
   });
+  return out;
+}
+
+function addPairing(plan: ImportPlan, pairing: Bundle["instances"][number]["pairings"][number], periodId: string): void {
+  const rows = pairingRows(pairing, periodId);
+  plan.pairings.push(rows.pairing);
+  plan.dutyPeriods.push(...rows.dutyPeriods);
+  plan.legs.push(...rows.legs);
 }
 
 function addCrewMember(plan: ImportPlan, member: Bundle["instances"][number]["crew"][number], place: string): string {

@@ -84,3 +84,8 @@ export function presetRuleSet(id: PresetId, agreement?: Parameters<typeof agreem
 }
 
 export const PRESET_IDS = Object.keys(PRESETS) as PresetId[];
+
+/** The preset a new award group of `position` starts from: flight-deck crew and cabin crew follow different rules. */
+export function presetFor(position: "captain" | "first_officer" | "purser" | "flight_attendant"): PresetId {
+  return position === "captain" || position === "first_officer" ? "us-flightcrew" : "us-cabin";
+}

@@ -4,8 +4,8 @@
  * common-practice figures.
  */
 import type { Position, RuleSet } from "../../lib/domain/index.ts";
-import { presetRuleSet } from "../../lib/rules/index.ts";
+import { presetFor, presetRuleSet } from "../../lib/rules/index.ts";
 
 export function ruleSetFor(position: Position): RuleSet {
-  return presetRuleSet(position === "captain" || position === "first_officer" ? "us-flightcrew" : "us-cabin");
+  return presetRuleSet(presetFor(position));
 }

@@ -9,24 +9,22 @@ import { stringify } from "csv-stringify/sync";
 import type { Bundle } from "../../lib/domain/index.ts";
 import { POSITIONS } from "./csv-columns.ts";
 
-const write = (dir: string, name: string, header: string[], rows: (string | number | boolean)[][]) =>
-  fs.writeFileSync(path.join(dir, name), stringify([header, ...rows.map((r) => r.map(String))]));
-
-/** Writes trips.csv, legs.csv, crew.csv and activities.csv for a bundle into `dir`. */
-export function writeCsv(bundle: Bundle, dir: string): string[] {
-  fs.mkdirSync(dir, { recursive: true });
+/** The four files' texts for a bundle: trips.csv, legs.csv, crew.csv and activities.csv. */
+export function csvTexts(bundle: Bundle): Record<"trips.csv" | "legs.csv" | "crew.csv" | "activities.csv", string> {
+  const out = {} as Record<"trips.csv" | "legs.csv" | "crew.csv" | "activities.csv", string>;
+  const write = (name: keyof typeof out, header: string[], rows: (string | number | boolean)[][]) => {
+    out[name] = stringify([header, ...rows.map((r) => r.map(String))]);
+  };
   const first = bundle.instances[0];
   if (!first) throw new Error("the bundle holds no instance");
   const pairings = new Map(bundle.instances.flatMap((i) => i.pairings).map((p) => [p.id, p]));
   const crew = bundle.instances.flatMap((i) => i.crew).sort((a, b) => a.seniority - b.seniority);
   write(
-    dir,
     "trips.csv",
     ["trip", "base", "block_minutes", "credit_minutes", "away_minutes", ...POSITIONS.map((p) => `need_${p}`), "requires"],
     [...pairings.values()].map((p) => [p.id, p.base, p.blockMinutes, p.creditMinutes, p.tafbMinutes, ...POSITIONS.map((pos) => p.crewNeeded[pos] ?? 0), p.requires.join(";")]),
   );
   write(
-    dir,
     "legs.csv",
     ["trip", "duty", "report_utc", "release_utc", "leg", "flight", "from", "to", "departs_utc", "arrives_utc", "deadhead", "block_minutes", "equipment"],
     [...pairings.values()].flatMap((p) =>
@@ -36,16 +34,22 @@ export function writeCsv(bundle: Bundle, dir: string): string[] {
     ),
   );
   write(
-    dir,
     "crew.csv",
     ["employee_number", "name", "seniority", "base", "position", "qualifications"],
     crew.map((c) => [c.id, c.name, c.seniority, c.base, c.position, c.qualifications.join(";")]),
   );
   write(
-    dir,
     "activities.csv",
     ["employee_number", "kind", "start_utc", "end_utc", "label"],
     crew.flatMap((c) => c.fixedActivities.map((a) => [c.id, a.kind, a.start, a.end, a.label ?? ""])),
   );
-  return ["trips.csv", "legs.csv", "crew.csv", "activities.csv"];
+  return out;
+}
+
+/** Writes trips.csv, legs.csv, crew.csv and activities.csv for a bundle into `dir`. */
+export function writeCsv(bundle: Bundle, dir: string): string[] {
+  fs.mkdirSync(dir, { recursive: true });
+  const texts = csvTexts(bundle);
+  for (const [name, text] of Object.entries(texts)) fs.writeFileSync(path.join(dir, name), text);
+  return Object.keys(texts);
 }
