@@ -10,10 +10,8 @@ import { listCell, minutesCell, wholeCell, yesNoCell } from "./cells";
 import { readTable, type ImportProblem, type Row } from "./csv-table";
 import { instantSchema } from "../domain/index";
 
-const needColumn = (p: Position) => `need_${p}`;
-
 export const TRIP_COLUMNS = {
-  required: ["trip", "base", "block_minutes", "credit_minutes", "away_minutes", ...positions.map(needColumn), "requires"],
+  required: ["trip", "base", "block_minutes", "credit_minutes", "away_minutes", "need_captain", "need_first_officer", "need_purser", "need_flight_attendant", "requires"],
 } as const;
 
 export const LEG_COLUMNS = {

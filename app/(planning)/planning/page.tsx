@@ -19,7 +19,17 @@ export default async function PlanningHome() {
   const periods = await listPeriods();
   return (
     <section>
-      <h1 className="text-xl font-semibold">Bid periods</h1>
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <h1 className="text-xl font-semibold">Bid periods</h1>
+        <div className="flex flex-wrap gap-2 text-sm">
+          <Link href="/planning/periods/new" className="rounded-md bg-slate-900 px-3 py-1.5 font-semibold text-white hover:bg-slate-700">
+            New period
+          </Link>
+          <Link href="/planning/import" className="rounded-md border border-slate-300 bg-white px-3 py-1.5 font-medium hover:bg-slate-50">
+            Import from JSON
+          </Link>
+        </div>
+      </div>
       {periods.length === 0 ? (
         <p className="mt-3 text-slate-600">No bid periods yet.</p>
       ) : (

@@ -34,6 +34,15 @@ export default async function PeriodPage({ params }: { params: Promise<{ id: str
           <a href={`/api/periods/${period.id}/export`} className="text-sky-800 underline">
             Export as JSON
           </a>
+          {period.state === "draft" ? (
+            <>
+              {" "}
+              ·{" "}
+              <Link href={`/planning/periods/${period.id}/import`} className="text-sky-800 underline">
+                Import trips and crew
+              </Link>
+            </>
+          ) : null}
         </p>
       </div>
       <section aria-label="Bidding" className="rounded-lg border border-slate-200 bg-white p-4">
@@ -46,7 +55,10 @@ export default async function PeriodPage({ params }: { params: Promise<{ id: str
             <div>
               <h2 className="font-semibold">{POSITION_LABEL[g.position] ?? g.position}</h2>
               <p className="text-sm text-slate-600">
-                {MODE_LABEL[g.mode] ?? g.mode} · time limit {elapsed(g.timeLimitSeconds * 1000)}
+                {MODE_LABEL[g.mode] ?? g.mode} · time limit {elapsed(g.timeLimitSeconds * 1000)} ·{" "}
+                <Link href={`/planning/periods/${period.id}/groups/${g.id}/settings`} className="text-sky-800 underline">
+                  Rule set and settings
+                </Link>
               </p>
             </div>
             {period.state === "open" ? (
