@@ -5,12 +5,14 @@
  * already in and the demo crew accounts' own bids left for the visitor; the
  * month before holds a bid each demo crew account submitted there.
  */
+import path from "node:path";
 import type { Db } from "../lib/db/client.ts";
 import { importBundle } from "../lib/db/period-import.ts";
 import { daysBetween } from "../lib/domain/time.ts";
 import { STATIONS } from "./carrier.ts";
 import { DEMO_PASSWORD, demoUsers, writeUsers, type UserSeed } from "./demo-users.ts";
 import { generatePeriod } from "./generator/generate-period.ts";
+import { writeCsv } from "./generator/write-csv.ts";
 import { writePastPeriod } from "./past-period.ts";
 import { nextPeriod } from "./small-scenario.ts";
 
@@ -31,6 +33,23 @@ export function demoBundle(now: Date) {
   // Two minutes per award group: a run a scheduler can watch (the engine's default is ten).
   const instances = bundle.instances.map((i) => ({ ...i, settings: { ...i.settings, timeLimitSeconds: 120 } }));
   return { bundle: { ...bundle, instances }, window };
+}
+
+/**
+ * The CSV files of the month after the demo's period, for trying the import
+ * (a new period, then its files): the same crew (the generator's crew depend
+ * on the seed only), that month's trips and leave. Returns the folder.
+ */
+export function writeDemoFiles(now: Date, root: string): string {
+  const zone = STATIONS.find((s) => s.code === DEMO_BASE)!.zone;
+  const current = nextPeriod(now, zone);
+  const [y, m] = current.startDate.split("-").map(Number) as [number, number];
+  const startDate = new Date(Date.UTC(y, m, 1)).toISOString().slice(0, 10);
+  const next = new Date(Date.UTC(y, m + 1, 1)).toISOString().slice(0, 10);
+  const bundle = generatePeriod({ seed: 7, crew: 32, tightness: 0.95, base: DEMO_BASE, startDate, days: daysBetween(startDate, next) });
+  const dir = path.join(root, startDate.slice(0, 7));
+  writeCsv(bundle, dir);
+  return dir;
 }
 
 /**

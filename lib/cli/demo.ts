@@ -12,7 +12,7 @@ import { createPrisma } from "../db/client.ts";
 import { resolveDatabase } from "../db/database.ts";
 import { REPO_ROOT, isFree } from "../db/local-server.ts";
 import { applyMigrations } from "../db/migrate.ts";
-import { seedDemoIfEmpty } from "../../seed/demo.ts";
+import { seedDemoIfEmpty, writeDemoFiles } from "../../seed/demo.ts";
 import { needsBuild } from "./build-state.ts";
 
 const log = (l: string) => console.log(`[demo] ${l}`);
@@ -44,6 +44,8 @@ try {
   const { seeded, users } = await seedDemoIfEmpty(prisma);
   await prisma.$disconnect();
   log(seeded ? "demo data written" : "existing data kept");
+  const files = writeDemoFiles(new Date(), path.join(REPO_ROOT, ".data", "demo-files"));
+  log(`CSV files of the month after the demo's period, to try "New period" and its import: ${path.relative(REPO_ROOT, files)}/`);
 
   if (needsBuild()) {
     log("building the web app (a minute on a small machine)…");

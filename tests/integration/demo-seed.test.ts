@@ -2,12 +2,17 @@
 // `npm run db:reset` call: the open month and, before it, a month holding a
 // bid each demo crew account submitted, so "start from my last bid" is there.
 import { createHash } from "node:crypto";
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
 import { canonicalize as independentJcs } from "json-canonicalize";
 import { beforeAll, describe, expect, inject, it } from "vitest";
 import { db } from "@/lib/db/client";
 import { copyPreviousBid, loadBid, previousBid } from "@/lib/db/bids";
 import { checkCredentials, type SessionUser } from "@/lib/db/users";
-import { seedDemoIfEmpty } from "@/seed/demo";
+import { seedDemoIfEmpty, writeDemoFiles } from "@/seed/demo";
+import { createPeriod } from "@/lib/db/period-create";
+import { importCsvFiles } from "@/lib/db/period-csv-import";
 import { DEMO_PASSWORD } from "@/seed/demo-users";
 import { truncateAll } from "../support/reset";
 
@@ -45,4 +50,17 @@ describe("the demo seed", () => {
     expect(copied.leftBehind).toEqual(["wish 2: free days named last period's dates", "wish 5: it named last period's trips (T105)"]);
     expect((await loadBid(user)).draft.wishes.map((w) => w.kind)).toEqual(["trip", "no-trip", "rhythm", "credit"]);
   });
+
+  it("writes the next month's CSV files, which import into a new period with the demo's crew unchanged", async () => {
+    const dir = writeDemoFiles(NOW, fs.mkdtempSync(path.join(os.tmpdir(), "demo-files-")));
+    expect(path.basename(dir)).toBe("2027-02");
+    const read = (f: string) => fs.readFileSync(path.join(dir, f), "utf8");
+    const scheduler = (await db().user.findFirstOrThrow({ where: { role: "scheduler" } })).id;
+    const { id } = await createPeriod({ baseCode: "HLV", startDate: "2027-02-01", endDate: "2027-02-28" }, scheduler);
+    const result = await importCsvFiles(id, scheduler, { trips: read("trips.csv"), legs: read("legs.csv"), crew: read("crew.csv"), activities: read("activities.csv") });
+    const crewCount = await db().crewMember.count();
+    expect(result.crew).toEqual({ added: 0, changed: 0, removed: 0, unchanged: crewCount });
+    expect(result.trips!.added).toBe(read("trips.csv").trimEnd().split("\n").length - 1);
+    expect(result.trips!.added).toBeGreaterThan(100);
+  }, 60_000);
 });
