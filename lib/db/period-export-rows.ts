@@ -120,8 +120,17 @@ async function loadCrew(tx: DbTx, where: Prisma.CrewMemberWhereInput, w: PeriodW
   const dailyFlight = groupBy(
     await tx.dailyFlightTotal.findMany({ where: { ...ids, date: { gte: dateColumn(w.dailyFrom), lt: startDate } } }),
   );
+  // The fairness ledger's weight from the latest earlier published period overrides the stored one (lib/fairness/ledger.ts).
+  const ledger = await tx.fairnessEntry.findMany({
+    where: { ...ids, bidPeriod: { startDate: { lt: startDate } } },
+    orderBy: { bidPeriod: { startDate: "desc" } },
+    select: { crewMemberId: true, carriedWeight: true },
+  });
+  const carried = new Map<string, number>();
+  for (const e of ledger) if (!carried.has(e.crewMemberId)) carried.set(e.crewMemberId, e.carriedWeight);
   return crew.map((member) => ({
     ...member,
+    carriedWeight: carried.get(member.id) ?? member.carriedWeight,
     activities: activities.get(member.id) ?? [],
     carryIn: carryIn.get(member.id) ?? [],
     pastDuties: pastDuties.get(member.id) ?? [],

@@ -15,6 +15,9 @@
  * - bids: each crew member's latest submitted version (the BidSubmission with
  *   the highest revision). The working copy (Bid) is a draft and never a bid;
  *   a crew member who never submitted has no entry;
+ * - each crew member's `carriedWeight`: the fairness ledger's weight from
+ *   their latest earlier published period (lib/fairness/ledger.ts), else the
+ *   crew row's own (1 unless an import set it);
  * - the group's rule-set document and settings, as stored.
  *
  * The output depends on the data only (orders in period-export-assemble.ts,

@@ -12,9 +12,15 @@
  *   publishing other runs replaces the award (a correction), audited as such.
  * - The period row is locked for the transaction, so two schedulers
  *   publishing at once publish once.
+ * - The period's fairness-ledger entries (lib/fairness/ledger.ts) are written
+ *   in the same transaction, one per crew member of each chosen run, from the
+ *   balance of their latest earlier period; a correction replaces them, never
+ *   adds a second set. Later periods' entries are not recomputed.
  */
 import { AppError, sha256Hex } from "../domain/index";
+import { ledgerFor } from "../fairness/index";
 import { db } from "./client";
+import type { DbTx } from "./period-db";
 import { exportPeriod } from "./period-export";
 
 export type PublishOutcome = { status: "published" | "corrected" | "unchanged"; message: string };
@@ -60,6 +66,7 @@ export async function publishPeriod(input: { periodId: string; runs: Record<stri
       await tx.awardRun.update({ where: { id: runId }, data: { reviewedById: input.reviewerId } });
     }
     await tx.bidPeriod.update({ where: { id: period.id }, data: { state: "published", publishedAt: now } });
+    await writeLedger(tx, period.id, period.startDate, [...chosen.values()]);
     await tx.notice.create({
       data: correction
         ? { bidPeriodId: period.id, kind: "award_corrected", text: `The award for ${period.name} was corrected: see your line again.` }
@@ -78,6 +85,35 @@ export async function publishPeriod(input: { periodId: string; runs: Record<stri
       ? { status: "corrected", message: `${period.name}: the corrected award is published and replaces the earlier one` }
       : { status: "published", message: `${period.name} is published: crew now see their lines` };
   });
+}
+
+/** The period's ledger entries from its chosen runs, replacing any it had. */
+async function writeLedger(tx: DbTx, periodId: string, startDate: Date, runIds: string[]): Promise<void> {
+  await tx.fairnessEntry.deleteMany({ where: { bidPeriodId: periodId } });
+  const lines = await tx.awardedLine.findMany({ where: { awardRunId: { in: runIds } }, select: { awardRunId: true, crewMemberId: true, satisfaction: true } });
+  const earlier = await tx.fairnessEntry.findMany({
+    where: { crewMemberId: { in: lines.map((l) => l.crewMemberId) }, bidPeriod: { startDate: { lt: startDate } } },
+    orderBy: { bidPeriod: { startDate: "desc" } },
+    select: { crewMemberId: true, balance: true },
+  });
+  const previous = new Map<string, number>();
+  for (const e of earlier) if (!previous.has(e.crewMemberId)) previous.set(e.crewMemberId, e.balance);
+  for (const runId of runIds) {
+    const steps = ledgerFor(lines.filter((l) => l.awardRunId === runId), previous);
+    await tx.fairnessEntry.createMany({
+      data: [...steps].map(([crewMemberId, step]) => ({ crewMemberId, bidPeriodId: periodId, awardRunId: runId, ...step })),
+    });
+  }
+}
+
+/** The period's ledger as its page shows it: each crew member's satisfaction, balance and the weight carried forward, most owed first. */
+export async function periodLedger(periodId: string) {
+  const rows = await db().fairnessEntry.findMany({
+    where: { bidPeriodId: periodId },
+    orderBy: [{ balance: "desc" }, { crewMember: { seniority: "asc" } }],
+    select: { satisfaction: true, balance: true, carriedWeight: true, crewMember: { select: { name: true, seniority: true, position: true } } },
+  });
+  return rows.map((r) => ({ name: r.crewMember.name, seniority: r.crewMember.seniority, position: r.crewMember.position, satisfaction: r.satisfaction, balance: r.balance, carriedWeight: r.carriedWeight }));
 }
 
 /** A crew member's line in the latest published period of their base, or null when none is published. */

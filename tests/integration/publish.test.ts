@@ -10,6 +10,7 @@ import { beforeAll, describe, expect, inject, it } from "vitest";
 import { sha256Hex } from "@/lib/domain";
 import { db } from "@/lib/db/client";
 import { exportPeriod } from "@/lib/db/period-export";
+import { createPeriod } from "@/lib/db/period-create";
 import { publishedLine, publishPeriod } from "@/lib/db/publish";
 import { workRun } from "@/lib/jobs/award-worker";
 import { smallScenario } from "@/seed/small-scenario";
@@ -66,6 +67,16 @@ describe("publishing a bid period", { timeout: 120_000 }, () => {
     expect(seen?.kind).toBe("line");
     expect(seen?.trips.map((t) => t.code).sort()).toEqual([...line.pairingCodes].sort());
     expect(seen?.creditMinutes).toBe(line.creditMinutes);
+    // The fairness ledger: one entry per crew member, from the chosen run's satisfaction; a first period's balances sum to 0 per group.
+    const entries = await db().fairnessEntry.findMany({ where: { bidPeriodId: periodId } });
+    const lines = await db().awardedLine.findMany({ where: { awardRunId: { in: Object.values(first) } } });
+    expect(entries).toHaveLength(12);
+    expect(entries.map((e) => [e.crewMemberId, e.awardRunId, e.satisfaction]).sort()).toEqual(lines.map((l) => [l.crewMemberId, l.awardRunId, l.satisfaction]).sort());
+    for (const runId of Object.values(first)) {
+      const group = entries.filter((e) => e.awardRunId === runId);
+      expect(group.reduce((sum, e) => sum + e.balance, 0)).toBeCloseTo(0, 9);
+      for (const e of group) expect(e.carriedWeight).toBeCloseTo(Math.min(2, Math.max(0.5, 1 + e.balance)), 12);
+    }
   });
 
   it("publishing the same runs again changes nothing and says so", async () => {
@@ -73,6 +84,7 @@ describe("publishing a bid period", { timeout: 120_000 }, () => {
     expect(outcome).toEqual({ status: "unchanged", message: "January 2027 is already published with these runs; nothing was changed" });
     expect(await auditCount("period.published")).toBe(1);
     expect(await auditCount("period.corrected")).toBe(0);
+    expect(await db().fairnessEntry.count({ where: { bidPeriodId: periodId } })).toBe(12);
   });
 
   it("refuses a stale run and writes nothing, not even the other group's fresh run", async () => {
@@ -96,6 +108,21 @@ describe("publishing a bid period", { timeout: 120_000 }, () => {
     expect(await auditCount("period.corrected")).toBe(1);
     const period = await db().bidPeriod.findUniqueOrThrow({ where: { id: periodId }, include: { groups: true } });
     expect(Object.fromEntries(period.groups.map((g) => [g.id, g.chosenRunId]))).toEqual(next);
+    // The ledger is replaced, not added to.
+    const entries = await db().fairnessEntry.findMany({ where: { bidPeriodId: periodId } });
+    expect(entries).toHaveLength(12);
+    expect(new Set(entries.map((e) => e.awardRunId))).toEqual(new Set(Object.values(next)));
+  });
+
+  it("carries the ledger's weights into the next period's export, and leaves this period's own export as it was", async () => {
+    const { id } = await createPeriod({ baseCode: "HLV", startDate: "2027-02-01", endDate: "2027-02-28" }, reviewerId);
+    const entries = new Map((await db().fairnessEntry.findMany({ where: { bidPeriodId: periodId }, include: { crewMember: true } })).map((e) => [e.crewMember.employeeNumber, e.carriedWeight]));
+    const next = await exportPeriod(db(), id);
+    const carried = new Map(next.instances.flatMap((i) => i.crew.map((c) => [c.id, c.carriedWeight])));
+    expect(carried).toEqual(entries);
+    expect([...carried.values()].some((w) => w !== 1)).toBe(true);
+    const own = await exportPeriod(db(), periodId);
+    expect(own.instances.flatMap((i) => i.crew.map((c) => c.carriedWeight)).every((w) => w === 1)).toBe(true);
   });
 
   it("refuses a run that has not finished, or belongs to another group", async () => {

@@ -3,6 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requireRole } from "@/lib/auth/session";
 import { periodRuns } from "@/lib/db/award-runs";
+import { periodLedger } from "@/lib/db/publish";
 import { isAppError } from "@/lib/domain/index";
 import { zonedDateTime } from "@/app/ui/format";
 import { RunAwardButton } from "../../run-award-button";
@@ -135,6 +136,52 @@ export default async function PeriodPage({ params }: { params: Promise<{ id: str
       ) : (
         <p className="text-sm text-slate-600">Publishing opens once bidding is closed.</p>
       )}
+      {period.state === "published" ? <LedgerSection periodId={period.id} /> : null}
+    </section>
+  );
+}
+
+/** The fairness ledger the published award wrote: who is owed, and the weight each carries into the next period. */
+async function LedgerSection({ periodId }: { periodId: string }) {
+  const rows = await periodLedger(periodId);
+  if (rows.length === 0) return null;
+  const owed = rows.filter((r) => r.balance > 0.005).length;
+  return (
+    <section aria-label="Fairness carried forward" className="rounded-lg border border-slate-200 bg-white p-4">
+      <h2 className="font-semibold">Fairness carried into the next period</h2>
+      <p className="mt-1 text-sm text-slate-600">
+        Each crew member&apos;s balance is how far their satisfaction fell short of their group&apos;s mean, with earlier periods counting half as much each month. {owed} of{" "}
+        {rows.length} are owed; in weighted-balance mode their weight next period grows with it (between 0.5 and 2).
+      </p>
+      <details className="mt-2">
+        <summary className="cursor-pointer text-sm font-medium text-sky-800">Show every crew member</summary>
+        <div className="mt-2 overflow-x-auto">
+          <table className="w-full min-w-[30rem] text-left text-sm">
+            <thead className="text-xs uppercase tracking-wide text-slate-500">
+              <tr>
+                <th className="py-1 pr-3 font-medium">Seniority</th>
+                <th className="py-1 pr-3 font-medium">Name</th>
+                <th className="py-1 pr-3 font-medium">Position</th>
+                <th className="py-1 pr-3 text-right font-medium">Satisfaction</th>
+                <th className="py-1 pr-3 text-right font-medium">Balance</th>
+                <th className="py-1 text-right font-medium">Weight next period</th>
+              </tr>
+            </thead>
+            <tbody>
+              {rows.map((r) => (
+                <tr key={r.seniority} className="border-t border-slate-100">
+                  <td className="py-1 pr-3 tabular-nums">{r.seniority}</td>
+                  <td className="py-1 pr-3">{r.name}</td>
+                  <td className="py-1 pr-3">{POSITION_LABEL[r.position] ?? r.position}</td>
+                  <td className="py-1 pr-3 text-right tabular-nums">{(r.satisfaction * 100).toFixed(0)} %</td>
+                  <td className="py-1 pr-3 text-right tabular-nums">{r.balance >= 0 ? "+" : "−"}{Math.abs(r.balance).toFixed(2)}</td>
+                  <td className="py-1 text-right tabular-nums">{r.carriedWeight.toFixed(2)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      </details>
     </section>
   );
 }
