@@ -4,7 +4,8 @@
  * notice to the crew where it concerns them. (Awarded and published follow
  * from the award runs and publish.ts.)
  *
- * - Open: a draft with trips and award groups becomes visible to its crew.
+ * - Open: a draft with trips and award groups becomes visible to its crew;
+ *   one period per base is open at a time.
  * - Extend: while open and before the deadline passes, to a later deadline.
  * - Close: allowed once the deadline has passed; before it only as "close
  *   early", which tells the crew. Closing freezes the bids: the last
@@ -36,6 +37,9 @@ export async function openBidding(periodId: string, actorUserId: string, now = n
     if (period.state !== "draft") throw new AppError("conflict", `bidding for ${period.name} has been opened already (it is ${period.state})`);
     if (period._count.pairings === 0 || period._count.groups === 0) throw new AppError("invalid", `${period.name} has no trips or no award groups yet: import them before opening bidding`);
     if (now.getTime() >= period.deadline.getTime()) throw new AppError("invalid", `the deadline of ${period.name} has passed already: set a later one before opening bidding`);
+    // Crew bid in one period at a time: their pages show their base's open period.
+    const other = await tx.bidPeriod.findFirst({ where: { baseId: period.baseId, state: "open", id: { not: periodId } }, select: { name: true } });
+    if (other) throw new AppError("conflict", `bidding for ${other.name} at this base is still open: close it before opening ${period.name}`);
     await tx.bidPeriod.update({ where: { id: periodId }, data: { state: "open", opensAt: now } });
     await audit(tx, actorUserId, "period.opened", periodId);
     const deadline = localDateTimeLabel(period.deadline.toISOString(), period.zone);

@@ -9,6 +9,7 @@
 import { beforeAll, describe, expect, inject, it } from "vitest";
 import { db } from "@/lib/db/client";
 import { createPeriod } from "@/lib/db/period-create";
+import { openBidding } from "@/lib/db/period-lifecycle";
 import { importCsvFiles, type CsvFiles } from "@/lib/db/period-csv-import";
 import { pairingFromRow } from "@/lib/db/pairing-rows";
 import { canonicalJson, isAppError, pairingSchema } from "@/lib/domain/index";
@@ -167,9 +168,11 @@ describe("creating a period and importing its CSV files", () => {
     expect(top[2]!.qualifications).toEqual(["A220", "lang:fr"]);
   });
 
-  it("refuses imports once bidding is open", async () => {
+  it("refuses imports once bidding is open, and a second open period at the base", async () => {
     const jan = await db().bidPeriod.findFirstOrThrow({ where: { name: "January 2027" } });
     await expect(importCsvFiles(jan.id, scheduler, files)).rejects.toThrow("imports change a period only while it is a draft, and January 2027 is open: crew bid on its trips as they are");
     await expect(importCsvFiles(feb, scheduler, { trips: files.trips })).rejects.toThrow(/imported together/);
+    // February has its trips now, but January's bidding is still open at the base.
+    await expect(openBidding(feb, scheduler, DEC_1)).rejects.toThrow("bidding for January 2027 at this base is still open: close it before opening February 2027");
   });
 });
