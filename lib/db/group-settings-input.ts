@@ -49,6 +49,17 @@ export const SETTING_LABEL: Record<string, string> = {
 
 type Problems = Record<string, string>;
 
+const UNIT: Record<string, string> = { timeLimitSeconds: " seconds" };
+
+/** Zod's bounds in words ("must be at most 86400 seconds"); other messages as they are. */
+function plain(issue: z.core.$ZodIssue): string {
+  const unit = UNIT[issue.path.map(String).join(".")] ?? "";
+  if (issue.code === "too_big" && issue.origin === "number") return `must be ${issue.inclusive ? "at most" : "below"} ${String(issue.maximum)}${unit}`;
+  if (issue.code === "too_small" && issue.origin === "number") return `must be ${issue.inclusive ? "at least" : "above"} ${String(issue.minimum)}${unit}`;
+  if (issue.code === "invalid_type" && issue.expected === "number") return "give a number";
+  return issue.message;
+}
+
 function settingProblem(problems: Problems, path: readonly PropertyKey[], message: string) {
   const key = path.map(String).join(".");
   const label = SETTING_LABEL[key] ?? SETTING_LABEL[String(path[0])] ?? key;
@@ -131,7 +142,7 @@ export function validateGroupSettings(raw: unknown, stored: { document: RuleSet;
     timeLimitSeconds: s.timeLimitSeconds ?? undefined,
   });
   const settings = awardSettingsSchema.safeParse(merged);
-  if (!settings.success) for (const issue of settings.error.issues) settingProblem(problems, issue.path, issue.message);
+  if (!settings.success) for (const issue of settings.error.issues) settingProblem(problems, issue.path, plain(issue));
 
   if (Object.keys(problems).length > 0 || !document || !settings.success) {
     throw new AppError("invalid", `nothing was saved: ${Object.values(problems).join("; ")}`, { fields: problems });

@@ -66,7 +66,11 @@ function fieldOf(key: string, value: unknown, prop: JsonProp | undefined): Param
 /** A rule of a document as a row of the screen. */
 export function ruleRow(rule: Rule, on: boolean): RuleRow {
   const props = checkProps(String(rule.params.check ?? rule.id));
-  return { id: rule.id, text: rule.text, on, params: { ...rule.params }, fields: Object.entries(rule.params).map(([key, value]) => fieldOf(key, value, props[key])) };
+  // In the order the check declares its parameters (stored JSON does not keep the document's order), unknown ones last.
+  const order = Object.keys(props);
+  const rank = (key: string) => (order.includes(key) ? order.indexOf(key) : order.length);
+  const keys = Object.keys(rule.params).sort((a, b) => rank(a) - rank(b) || a.localeCompare(b));
+  return { id: rule.id, text: rule.text, on, params: { ...rule.params }, fields: keys.map((key) => fieldOf(key, rule.params[key], props[key])) };
 }
 
 /** The document's rules (in force), then the rules of its preset that it leaves out (off). */

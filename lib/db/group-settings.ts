@@ -73,6 +73,7 @@ export async function groupSettings(groupId: string) {
 /** What a save did, for the screen. */
 export interface SaveOutcome {
   message: string;
+  periodId: string;
   changes: string[];
   ruleSet: { id: string; name: string; created: boolean };
 }
@@ -124,7 +125,7 @@ export async function saveGroupSettings(groupId: string, actorUserId: string, in
     const sameSettings = canonicalJson(JSON.parse(JSON.stringify(before.settings))) === canonicalJson(after.settings);
     const sameDocument = canonicalJson(before.document) === canonicalJson(after.document);
     if (sameDocument && sameSettings) {
-      return { message: "Nothing changed; nothing was saved", changes: [], ruleSet: { id: group.ruleSet.id, name: group.ruleSet.name, created: false } };
+      return { message: "Nothing changed; nothing was saved", periodId: group.bidPeriodId, changes: [], ruleSet: { id: group.ruleSet.id, name: group.ruleSet.name, created: false } };
     }
     const row = sameDocument ? { id: group.ruleSet.id, name: group.ruleSet.name, created: false } : await ruleSetRow(tx, after.document, `${after.document.name} · ${label}`);
     await tx.awardGroup.update({ where: { id: groupId }, data: { ruleSetId: row.id, settings: after.settings as Prisma.InputJsonValue } });
@@ -143,6 +144,6 @@ export async function saveGroupSettings(groupId: string, actorUserId: string, in
     });
     const what = changes.length > 0 ? changes.join("; ") : "the rule-set document rewritten";
     const where = row.id === group.ruleSet.id ? "" : row.created ? ` The rules are now in a rule set of their own, "${row.name}".` : ` The rules are those of rule set "${row.name}", which is used as it stands.`;
-    return { message: `Saved for ${label}: ${what}.${where}`, changes, ruleSet: row };
+    return { message: `Saved for ${label}: ${what}.${where}`, periodId: group.bidPeriodId, changes, ruleSet: row };
   });
 }
