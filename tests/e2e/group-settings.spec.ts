@@ -19,6 +19,15 @@ test("a scheduler changes the mode, the time limit and a rule, and the period pa
   await ask.getByRole("button", { name: "Keep the current rules" }).click();
   await expect(ask).toBeHidden();
   await expect(page.getByRole("listitem", { name: "Rule fdp-limit" })).toBeVisible();
+  // Replacing loads the cabin preset's own rules into the form; "Undo changes" brings back the stored ones.
+  await page.getByLabel("Start from", { exact: true }).selectOption({ label: "Cabin (US 121.467)" });
+  await ask.getByRole("button", { name: "Replace the rules" }).click();
+  await expect(page.getByRole("listitem", { name: "Rule max-scheduled-duty" })).toBeVisible();
+  await expect(page.getByRole("listitem", { name: "Rule fdp-limit" })).toHaveCount(0);
+  await page.getByRole("button", { name: "Undo changes" }).click();
+  await expect(page.getByRole("listitem", { name: "Rule fdp-limit" })).toBeVisible();
+  await expect(page.getByRole("listitem", { name: "Rule max-scheduled-duty" })).toHaveCount(0);
+  await expect(page.getByLabel("Start from", { exact: true })).toHaveValue("us-flightcrew");
 
   // The fairness floor is offered in weighted balance only; the wish weights follow the rank decay.
   await expect(page.getByLabel("Fairness floor", { exact: true })).toHaveCount(0);

@@ -58,9 +58,13 @@ function Field({ label, hint, error, children }: { label: string; hint?: string;
   const id = useId();
   return (
     <div className="space-y-1">
-      <label htmlFor={id} className="block text-sm font-medium text-slate-800">
-        {label}
-      </label>
+      {children ? (
+        <label htmlFor={id} className="block text-sm font-medium text-slate-800">
+          {label}
+        </label>
+      ) : (
+        <p className="text-sm font-medium text-slate-800">{label}</p>
+      )}
       {children?.(id)}
       {hint ? <p className="text-xs text-slate-600">{hint}</p> : null}
       {error ? (
