@@ -244,7 +244,7 @@ function summary(run: {
     finishedAt: run.finishedAt?.toISOString() ?? null,
     requestedBy: run.requestedBy?.name ?? null,
     cancelAsked: run.cancelRequestedAt !== null,
-    mode: settings.mode ?? "balanced",
+    mode: settings.mode ?? "strict",
     timeLimitSeconds: settings.timeLimitSeconds ?? 0,
     preview: run.preview,
   };
@@ -269,7 +269,7 @@ export async function periodRuns(periodId: string) {
     deadline: period.deadline.toISOString(),
     groups: period.groups.map((g) => {
       const settings = (g.settings ?? {}) as { mode?: string; timeLimitSeconds?: number };
-      return { id: g.id, position: g.position, chosenRunId: g.chosenRunId, mode: settings.mode ?? "balanced", timeLimitSeconds: settings.timeLimitSeconds ?? 600, runs: g.runs.map(summary) };
+      return { id: g.id, position: g.position, chosenRunId: g.chosenRunId, mode: settings.mode ?? "strict", timeLimitSeconds: settings.timeLimitSeconds ?? 600, runs: g.runs.map(summary) };
     }),
   };
 }

@@ -67,7 +67,9 @@ function refuse(problems: ImportProblem[]): never {
   const shown = problems.slice(0, 200);
   throw new AppError(
     "invalid",
-    `${problems.length === 1 ? "1 problem" : `${problems.length} problems`} in the files; nothing was imported. ${problemText(problems[0]!)}${problems.length > 1 ? " …" : ""}`,
+    problems.length === 1
+      ? `1 problem in the files; nothing was imported. ${problemText(problems[0]!)}`
+      : `${problems.length} problems in the files; nothing was imported. The first: ${problemText(problems[0]!)}`,
     { problems: shown, total: problems.length },
   );
 }

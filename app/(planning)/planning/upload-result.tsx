@@ -34,7 +34,7 @@ export function UploadResult({ answer }: { answer: UploadAnswer | undefined }) {
       </p>
       {answer.problems.length > 0 ? (
         <div className="overflow-x-auto rounded-md border border-red-200">
-          <table aria-label="Problems in the files" className="w-full min-w-[28rem] text-left text-sm">
+          <table aria-label="Problems in the files" className="w-full text-left text-xs sm:text-sm">
             <thead className="bg-red-50 text-xs uppercase tracking-wide text-red-900">
               <tr>
                 <th className="px-2 py-1 font-medium">File</th>
@@ -46,9 +46,9 @@ export function UploadResult({ answer }: { answer: UploadAnswer | undefined }) {
             <tbody>
               {answer.problems.map((p, k) => (
                 <tr key={k} className="border-t border-red-100">
-                  <td className="px-2 py-1 font-mono">{p.file ?? ""}</td>
+                  <td className="whitespace-nowrap px-2 py-1 font-mono">{p.file ?? ""}</td>
                   <td className="px-2 py-1 text-right tabular-nums">{p.line ?? ""}</td>
-                  <td className="px-2 py-1 font-mono">{p.column ?? ""}</td>
+                  <td className="break-all px-2 py-1 font-mono">{p.column ?? ""}</td>
                   <td className="px-2 py-1">{p.message}</td>
                 </tr>
               ))}
