@@ -18,6 +18,10 @@ test("screenshots of publishing and of a published line", async ({ page }) => {
   await expect(page.getByText("State: published")).toBeVisible();
   await page.evaluate(() => window.scrollTo(0, 0));
   await page.screenshot({ path: path.join(OUT, "period-published.png"), fullPage: true });
+  const ledger = page.getByRole("region", { name: "Fairness carried forward" });
+  await ledger.getByText("Show every crew member").click();
+  await ledger.scrollIntoViewIfNeeded();
+  await ledger.screenshot({ path: path.join(OUT, "fairness-ledger.png") });
   await form.getByRole("checkbox").check();
   await form.getByRole("button", { name: "Publish correction" }).click();
   await expect(form.getByRole("status")).toHaveText("January 2027 is already published with these runs; nothing was changed");

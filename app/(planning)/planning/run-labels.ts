@@ -27,6 +27,14 @@ export const PHASE_LABEL: Record<string, string> = {
 
 export const POSITION_LABEL: Record<string, string> = { captain: "Captains", first_officer: "First officers", flight_attendant: "Flight attendants", purser: "Pursers" };
 
+/** One crew member's position, in the singular. */
+export const POSITION_ONE: Record<string, string> = {
+  captain: "Captain",
+  first_officer: "First officer",
+  purser: "Purser",
+  flight_attendant: "Flight attendant",
+};
+
 export const MODE_LABEL: Record<string, string> = { strict: "Strict seniority", balanced: "Weighted balance" };
 
 /** "1 min 05 s" */

@@ -10,7 +10,7 @@ import { RunAwardButton } from "../../run-award-button";
 import { PublishForm } from "./publish-form";
 import { BiddingSteps } from "./bidding-steps";
 import { now } from "@/lib/clock";
-import { elapsed, MODE_LABEL, POSITION_LABEL, STATE_LABEL, STATE_STYLE } from "../../run-labels";
+import { elapsed, MODE_LABEL, POSITION_LABEL, POSITION_ONE, STATE_LABEL, STATE_STYLE } from "../../run-labels";
 
 export const metadata: Metadata = { title: "Bid period" };
 
@@ -172,7 +172,7 @@ async function LedgerSection({ periodId }: { periodId: string }) {
                 <tr key={r.seniority} className="border-t border-slate-100">
                   <td className="py-1 pr-3 tabular-nums">{r.seniority}</td>
                   <td className="py-1 pr-3">{r.name}</td>
-                  <td className="py-1 pr-3">{POSITION_LABEL[r.position] ?? r.position}</td>
+                  <td className="py-1 pr-3">{POSITION_ONE[r.position] ?? r.position}</td>
                   <td className="py-1 pr-3 text-right tabular-nums">{(r.satisfaction * 100).toFixed(0)} %</td>
                   <td className="py-1 pr-3 text-right tabular-nums">{r.balance >= 0 ? "+" : "−"}{Math.abs(r.balance).toFixed(2)}</td>
                   <td className="py-1 text-right tabular-nums">{r.carriedWeight.toFixed(2)}</td>
