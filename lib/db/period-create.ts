@@ -39,6 +39,7 @@ export const createPeriodInput = z
     if (days < 1) ctx.addIssue({ code: "custom", path: ["endDate"], message: "the last day is before the first day" });
     else if (days > 42) ctx.addIssue({ code: "custom", path: ["endDate"], message: `a period is at most 42 days; this one is ${days}` });
     if (v.deadlineDate && v.deadlineDate >= v.startDate) ctx.addIssue({ code: "custom", path: ["deadlineDate"], message: "bidding must close before the period starts" });
+    if (v.deadlineTime && !v.deadlineDate) ctx.addIssue({ code: "custom", path: ["deadlineDate"], message: "a deadline time needs its date" });
     if (v.opensDate && v.deadlineDate && v.opensDate > v.deadlineDate) ctx.addIssue({ code: "custom", path: ["opensDate"], message: "bidding must open on or before its deadline" });
   });
 export type CreatePeriodInput = z.input<typeof createPeriodInput>;

@@ -16,7 +16,11 @@
  *   (they may be on leave, not gone);
  * - activities: for each crew member the file names (and, when crew.csv comes
  *   along, each crew member in it) the activities touching this period
- *   become the file's;
+ *   become the file's (writeActivities says what happens at the edge of a
+ *   period whose bidding is under way);
+ * - while another period of the base is between opening and publishing, its
+ *   bids and runs use the crew list as it stands: crew changes are refused
+ *   until it is published;
  * - the period gains an award group for each position the crew file holds.
  * Imports change a period only while it is a draft: once bidding opens, crew
  * bid on these trips.
@@ -32,7 +36,9 @@ import { activityColumns, bulkInsert, dutyPeriodColumns, legColumns } from "./pe
 import { pairingRows } from "./period-import-rows";
 import { pairingFromRow } from "./pairing-rows";
 import { randomUUID } from "node:crypto";
-import { addDays, startOfLocalDay, toInstant } from "../domain/index";
+import { addDays, overlaps, startOfLocalDay, toInstant } from "../domain/index";
+import { Prisma } from "./generated/client";
+import { CREW_LIST_LOCK } from "./locks";
 
 /** The uploaded files' texts; any may be absent. */
 export interface CsvFiles {
@@ -49,12 +55,19 @@ export interface Counts {
   unchanged: number;
 }
 
+export interface ActivityCounts {
+  replaced: number;
+  unchanged: number;
+  rows: number;
+  kept: number;
+}
+
 /** What an import did. */
 export interface CsvImportResult {
   trips?: Counts;
   crew?: Counts;
-  /** crew members whose activities in this period were replaced / left as they were */
-  activities?: { replaced: number; unchanged: number; rows: number };
+  /** crew members whose activities in this period changed / did not; rows written; activities the file lacks but left alone because they reach into a period under way */
+  activities?: ActivityCounts;
   groupsAdded: Position[];
   changed: boolean;
   message: string;
@@ -96,46 +109,79 @@ export async function importCsvFiles(periodId: string, actorUserId: string, file
     problems.push(...read.problems);
     pairings = read.pairings;
   }
-  let crewFiles: ReturnType<typeof readCrewFiles> | undefined;
-  if (files.crew !== undefined || files.activities !== undefined) {
-    const rows = await db().crewMember.findMany({ select: { employeeNumber: true, seniority: true, base: { select: { stationCode: true } } } });
+  const periodStart = startOfLocalDay(startDate, period.zone);
+  const periodEnd = startOfLocalDay(addDays(endDate, 1), period.zone);
+  const readCrew = async (client: DbTx | ReturnType<typeof db>) => {
+    if (files.crew === undefined && files.activities === undefined) return undefined;
+    const rows = await client.crewMember.findMany({ select: { employeeNumber: true, seniority: true, base: { select: { stationCode: true } } } });
     const known = new Map(rows.map((r) => [r.employeeNumber, { seniority: r.seniority, baseCode: r.base.stationCode }]));
-    crewFiles = readCrewFiles(files.crew, files.activities, {
-      baseCode,
-      periodStart: startOfLocalDay(startDate, period.zone),
-      periodEnd: startOfLocalDay(addDays(endDate, 1), period.zone),
-      known,
-    });
-    problems.push(...crewFiles.problems);
-  }
+    return readCrewFiles(files.crew, files.activities, { baseCode, periodStart, periodEnd, known });
+  };
+  // Checked first without locks, so bad files are refused at once with every problem…
+  const precheck = await readCrew(db());
+  problems.push(...(precheck?.problems ?? []));
   if (problems.length > 0) refuse(problems);
 
-  return db().$transaction(
-    async (tx) => {
-      await tx.$queryRaw`SELECT id FROM "BidPeriod" WHERE id = ${periodId} FOR UPDATE`;
-      draftOnly(await tx.bidPeriod.findUniqueOrThrow({ where: { id: periodId }, select: { name: true, state: true } }));
-      const result: CsvImportResult = { groupsAdded: [], changed: false, message: "" };
-      if (pairings) result.trips = await writeTrips(tx, periodId, baseCode, pairings);
-      const ids = new Map<string, string>();
-      if (crewFiles?.crew) result.crew = await writeCrew(tx, period.base.id, crewFiles.crew, ids);
-      if (crewFiles?.activities) {
-        const named = new Set([...crewFiles.activities.keys(), ...(crewFiles.crew ?? []).map((c) => c.employeeNumber)]);
-        result.activities = await writeActivities(tx, named, crewFiles.activities, startOfLocalDay(startDate, period.zone), startOfLocalDay(addDays(endDate, 1), period.zone));
-      }
-      if (crewFiles?.crew) result.groupsAdded = await ensureGroups(tx, periodId, crewFiles.crew.map((c) => c.position));
-      const moved = (c?: Counts) => !!c && c.added + c.changed + c.removed > 0;
-      result.changed = moved(result.trips) || moved(result.crew) || (result.activities?.replaced ?? 0) > 0 || result.groupsAdded.length > 0;
-      result.message = summary(result);
-      if (result.changed) {
-        const hashes = Object.fromEntries(given.map((k) => [`${k}.csv`, sha256Text(files[k]!)]));
-        await tx.auditEvent.create({
-          data: { actorUserId, action: "period.imported", entity: "BidPeriod", entityId: periodId, detail: JSON.parse(JSON.stringify({ files: hashes, ...result, message: undefined })) },
-        });
-      }
-      return result;
-    },
-    { timeout: 120_000, maxWait: 10_000 },
-  );
+  try {
+    return await db().$transaction(
+      async (tx) => {
+        // …then again under the carrier's crew lock: employee and seniority numbers are the carrier's, so two
+        // imports into two periods must not both pass the check against the same crew list.
+        await tx.$executeRawUnsafe(`SELECT pg_advisory_xact_lock(${CREW_LIST_LOCK})`);
+        await tx.$queryRaw`SELECT id FROM "BidPeriod" WHERE id = ${periodId} FOR UPDATE`;
+        draftOnly(await tx.bidPeriod.findUniqueOrThrow({ where: { id: periodId }, select: { name: true, state: true } }));
+        const crewFiles = await readCrew(tx);
+        if (crewFiles && crewFiles.problems.length > 0) refuse(crewFiles.problems);
+        const active = await activePeriods(tx, period.base.id, periodId);
+        const result: CsvImportResult = { groupsAdded: [], changed: false, message: "" };
+        if (pairings) result.trips = await writeTrips(tx, periodId, baseCode, pairings);
+        const ids = new Map<string, string>();
+        if (crewFiles?.crew) result.crew = await writeCrew(tx, period.base.id, crewFiles.crew, ids, active);
+        if (crewFiles?.activities) {
+          const named = new Set([...crewFiles.activities.keys(), ...(crewFiles.crew ?? []).map((c) => c.employeeNumber)]);
+          result.activities = await writeActivities(tx, named, crewFiles.activities, periodStart, periodEnd, active);
+        }
+        if (crewFiles?.crew) result.groupsAdded = await ensureGroups(tx, periodId, crewFiles.crew.map((c) => c.position));
+        const moved = (c?: Counts) => !!c && c.added + c.changed + c.removed > 0;
+        result.changed = moved(result.trips) || moved(result.crew) || (result.activities?.replaced ?? 0) > 0 || result.groupsAdded.length > 0;
+        result.message = summary(result);
+        if (result.changed) {
+          const hashes = Object.fromEntries(given.map((k) => [`${k}.csv`, sha256Text(files[k]!)]));
+          await tx.auditEvent.create({
+            data: { actorUserId, action: "period.imported", entity: "BidPeriod", entityId: periodId, detail: JSON.parse(JSON.stringify({ files: hashes, ...result, message: undefined })) },
+          });
+        }
+        return result;
+      },
+      { timeout: 120_000, maxWait: 10_000 },
+    );
+  } catch (error) {
+    throw uniqueClash(error);
+  }
+}
+
+
+/** Periods of the base, other than `periodId`, whose bidding has opened and whose award is not yet published. */
+async function activePeriods(tx: DbTx, baseId: string, periodId: string) {
+  const rows = await tx.bidPeriod.findMany({
+    where: { baseId, id: { not: periodId }, state: { in: ["open", "closed", "awarded"] } },
+    select: { name: true, state: true, startDate: true, endDate: true, zone: true },
+  });
+  return rows.map((p) => ({
+    name: p.name,
+    state: p.state,
+    start: startOfLocalDay(p.startDate.toISOString().slice(0, 10), p.zone),
+    end: startOfLocalDay(addDays(p.endDate.toISOString().slice(0, 10), 1), p.zone),
+  }));
+}
+type Active = Awaited<ReturnType<typeof activePeriods>>;
+
+/** A unique constraint hit by a write that raced another (should the lock ever be bypassed) as a conflict. */
+function uniqueClash(error: unknown): unknown {
+  if (error instanceof Prisma.PrismaClientKnownRequestError && error.code === "P2002") {
+    return new AppError("conflict", "the crew list changed while these files were being imported; nothing was imported: please import them again");
+  }
+  return error;
 }
 
 function draftOnly(period: { name: string; state: string }): void {
@@ -179,7 +225,10 @@ async function writeTrips(tx: DbTx, periodId: string, baseCode: string, pairings
   return counts;
 }
 
-async function writeCrew(tx: DbTx, baseId: string, crew: CrewFileMember[], ids: Map<string, string>): Promise<Counts> {
+/** "January 2027 (open)" and "February 2027 (closed)". */
+const activeNames = (periods: Active) => periods.map((p) => `${p.name} (${p.state})`).join(" and ");
+
+async function writeCrew(tx: DbTx, baseId: string, crew: CrewFileMember[], ids: Map<string, string>, active: Active): Promise<Counts> {
   const existing = await tx.crewMember.findMany({ where: { employeeNumber: { in: crew.map((c) => c.employeeNumber) } } });
   const byNumber = new Map(existing.map((r) => [r.employeeNumber, r]));
   const counts: Counts = { added: 0, changed: 0, removed: 0, unchanged: 0 };
@@ -195,6 +244,15 @@ async function writeCrew(tx: DbTx, baseId: string, crew: CrewFileMember[], ids: 
     const same = row.name === c.name && row.seniority === c.seniority && row.position === c.position && canonicalJson(row.qualifications) === canonicalJson(c.qualifications);
     if (same) counts.unchanged += 1;
     else updates.push({ id: row.id, c });
+  }
+  // The base's crew list is read live by every period's export: while another period's bidding is under way,
+  // changing it would change the crew its bids and runs were made with.
+  if (active.length > 0 && updates.length + creates.length > 0) {
+    const who = [...updates.map((u) => u.c), ...creates].slice(0, 5).map((c) => `employee ${c.employeeNumber} (line ${c.line})`);
+    throw new AppError(
+      "conflict",
+      `crew.csv changes the crew list (${who.join(", ")}${updates.length + creates.length > 5 ? " …" : ""}) while ${activeNames(active)} at this base is between opening and publishing, and its bids and runs use the crew as they are; import crew changes once it is published. Nothing was imported`,
+    );
   }
   // Seniority is unique: park the renumbered crew on free negative numbers first, so a swap never collides.
   const renumbered = updates.filter(({ c }) => byNumber.get(c.employeeNumber)!.seniority !== c.seniority);
@@ -212,39 +270,60 @@ async function writeCrew(tx: DbTx, baseId: string, crew: CrewFileMember[], ids: 
   return counts;
 }
 
+/**
+ * Each named crew member's activities touching the period become the file's: what the file lacks is removed,
+ * what it adds is written, what is in both stays as it is. An activity that reaches into a period whose bidding
+ * is under way is left alone when the file lacks it (it belongs to that period too), and refused when the file
+ * adds it (it would change that period).
+ */
 async function writeActivities(
   tx: DbTx,
   named: Set<string>,
   activities: Map<string, FixedActivity[]>,
   periodStart: string,
   periodEnd: string,
-): Promise<{ replaced: number; unchanged: number; rows: number }> {
+  active: Active,
+): Promise<ActivityCounts> {
   const crew = await tx.crewMember.findMany({ where: { employeeNumber: { in: [...named] } }, select: { id: true, employeeNumber: true } });
   const touching = { startsAt: { lt: new Date(periodEnd) }, endsAt: { gt: new Date(periodStart) } };
-  const rows = await tx.fixedActivity.findMany({ where: { crewMemberId: { in: crew.map((c) => c.id) }, ...touching }, orderBy: [{ startsAt: "asc" }, { kind: "asc" }] });
-  const key = (list: FixedActivity[]) => canonicalJson([...list].sort((a, b) => a.start.localeCompare(b.start) || a.kind.localeCompare(b.kind) || (a.label ?? "").localeCompare(b.label ?? "")));
-  let replaced = 0;
-  let unchanged = 0;
-  let written = 0;
+  const rows = await tx.fixedActivity.findMany({ where: { crewMemberId: { in: crew.map((c) => c.id) }, ...touching } });
+  const counts: ActivityCounts = { replaced: 0, unchanged: 0, rows: 0, kept: 0 };
   const inserts: Array<{ id: string; crewMemberId: string; kind: FixedActivity["kind"]; startsAt: Date; endsAt: Date; label: string }> = [];
-  const clear: string[] = [];
+  const removals: string[] = [];
+  const reaches = (a: { start: string; end: string }) => active.find((p) => overlaps(a.start, a.end, p.start, p.end));
   for (const c of crew) {
     const now = rows
       .filter((r) => r.crewMemberId === c.id)
-      .map((r) => ({ kind: r.kind, start: toInstant(r.startsAt), end: toInstant(r.endsAt), ...(r.label ? { label: r.label } : {}) }));
+      .map((r) => ({ id: r.id, activity: { kind: r.kind, start: toInstant(r.startsAt), end: toInstant(r.endsAt), ...(r.label ? { label: r.label } : {}) } as FixedActivity }));
     const wanted = activities.get(c.employeeNumber) ?? [];
-    if (key(now as FixedActivity[]) === key(wanted)) {
-      unchanged += 1;
+    const have = new Set(now.map((n) => canonicalJson(n.activity)));
+    const want = new Set(wanted.map((a) => canonicalJson(a)));
+    const added = wanted.filter((a, k) => !have.has(canonicalJson(a)) && wanted.findIndex((b) => canonicalJson(b) === canonicalJson(a)) === k);
+    const gone = now.filter((n) => !want.has(canonicalJson(n.activity)));
+    for (const a of added) {
+      const hit = reaches(a);
+      if (hit) {
+        throw new AppError(
+          "conflict",
+          `activities.csv adds employee ${c.employeeNumber}'s ${a.kind} from ${a.start} to ${a.end}, which reaches into ${hit.name} (${hit.state}) while its bidding is under way; nothing was imported`,
+        );
+      }
+    }
+    const kept = gone.filter((n) => reaches(n.activity));
+    const removed = gone.filter((n) => !reaches(n.activity));
+    counts.kept += kept.length;
+    if (added.length === 0 && removed.length === 0) {
+      counts.unchanged += 1;
       continue;
     }
-    replaced += 1;
-    clear.push(c.id);
-    for (const a of wanted) inserts.push({ id: randomUUID(), crewMemberId: c.id, kind: a.kind, startsAt: new Date(a.start), endsAt: new Date(a.end), label: a.label ?? "" });
-    written += wanted.length;
+    counts.replaced += 1;
+    removals.push(...removed.map((n) => n.id));
+    for (const a of added) inserts.push({ id: randomUUID(), crewMemberId: c.id, kind: a.kind, startsAt: new Date(a.start), endsAt: new Date(a.end), label: a.label ?? "" });
+    counts.rows += added.length;
   }
-  if (clear.length > 0) await tx.fixedActivity.deleteMany({ where: { crewMemberId: { in: clear }, ...touching } });
+  if (removals.length > 0) await tx.fixedActivity.deleteMany({ where: { id: { in: removals } } });
   await bulkInsert(tx, "FixedActivity", activityColumns, inserts);
-  return { replaced, unchanged, rows: written };
+  return counts;
 }
 
 function summary(r: CsvImportResult): string {
@@ -254,7 +333,10 @@ function summary(r: CsvImportResult): string {
     [c.added && `${c.added} added`, c.changed && `${c.changed} changed`, c.removed && `${c.removed} removed`, c.unchanged && `${c.unchanged} unchanged`].filter(Boolean).join(", ");
   if (r.trips) parts.push(`trips: ${counts(r.trips)}`);
   if (r.crew) parts.push(`crew: ${counts(r.crew)}`);
-  if (r.activities) parts.push(`activities: replaced for ${r.activities.replaced} crew (${r.activities.rows} rows), ${r.activities.unchanged} unchanged`);
+  if (r.activities) {
+    const kept = r.activities.kept ? `, ${r.activities.kept} reaching into a period under way left as they are` : "";
+    parts.push(`activities: changed for ${r.activities.replaced} crew (${r.activities.rows} rows written), ${r.activities.unchanged} unchanged${kept}`);
+  }
   if (r.groupsAdded.length > 0) parts.push(`new award groups: ${r.groupsAdded.join(", ")}`);
   return `Imported. ${parts.join("; ")}.`;
 }

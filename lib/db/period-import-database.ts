@@ -8,6 +8,7 @@ import type { Prisma } from "./generated/client";
 import type { DbTx } from "./period-db";
 import { dateText } from "./period-export-rows";
 import type { ImportPlan } from "./period-import-rows";
+import { CREW_LIST_LOCK } from "./locks";
 
 async function stationConflicts(tx: DbTx, plan: ImportPlan, problems: string[]): Promise<void> {
   const existing = await tx.station.findMany({ where: { code: { in: plan.stations.map((s) => s.station.code) } } });
@@ -24,16 +25,17 @@ async function stationConflicts(tx: DbTx, plan: ImportPlan, problems: string[]):
 }
 
 async function periodConflicts(tx: DbTx, plan: ImportPlan, problems: string[]): Promise<void> {
-  const { id, startDate } = plan.period;
+  const { id, startDate, endDate } = plan.period;
   const same = await tx.bidPeriod.findUnique({ where: { id }, select: { name: true } });
   if (same) problems.push(`period.id "${id}": the database already has a bid period with this id ("${same.name}")`);
+  // A base's periods do not overlap (as period-create.ts keeps them); the base row is locked by the caller when it exists.
   const clash = await tx.bidPeriod.findFirst({
-    where: { base: { stationCode: plan.baseCode }, startDate, NOT: { id } },
-    select: { id: true, name: true },
+    where: { base: { stationCode: plan.baseCode }, startDate: { lte: endDate as Date }, endDate: { gte: startDate as Date }, NOT: { id } },
+    select: { id: true, name: true, startDate: true, endDate: true },
   });
   if (clash) {
     problems.push(
-      `period.startDate ${dateText(startDate as Date)}: base ${plan.baseCode} already has a bid period starting that day ("${clash.name}", ${clash.id})`,
+      `period ${dateText(startDate as Date)} to ${dateText(endDate as Date)}: base ${plan.baseCode} already has a bid period over those days ("${clash.name}", ${dateText(clash.startDate)} to ${dateText(clash.endDate)})`,
     );
   }
 }
@@ -68,6 +70,9 @@ async function crewConflicts(tx: DbTx, plan: ImportPlan, problems: string[]): Pr
  * number already held.
  */
 export async function refuseConflicts(tx: DbTx, plan: ImportPlan): Promise<void> {
+  // The same locks as "New period" and a CSV import take: the base row, and the carrier's crew list.
+  await tx.$queryRaw`SELECT id FROM "Base" WHERE "stationCode" = ${plan.baseCode} FOR UPDATE`;
+  await tx.$executeRawUnsafe(`SELECT pg_advisory_xact_lock(${CREW_LIST_LOCK})`);
   const problems: string[] = [];
   await stationConflicts(tx, plan, problems);
   await periodConflicts(tx, plan, problems);

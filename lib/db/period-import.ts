@@ -115,7 +115,13 @@ export interface ImportResult {
  * clashes with the database. Rows are written in bulk (period-import-write.ts):
  * a 300-crew, 1,000-pairing bundle takes a few seconds.
  */
-export async function importBundle(prisma: Db, input: unknown, opts: ImportOptions = {}): Promise<ImportResult> {
+export async function importBundle(
+  prisma: Db,
+  input: unknown,
+  opts: ImportOptions = {},
+  /** more writes in the same transaction (the JSON upload's audit entry) */
+  also?: (tx: Parameters<Parameters<Db["$transaction"]>[0]>[0]) => Promise<void>,
+): Promise<ImportResult> {
   const parsed = bundleSchema.safeParse(input);
   if (!parsed.success) throw invalidInput("the bundle", parsed.error);
   const bundle = parsed.data;
@@ -147,6 +153,7 @@ export async function importBundle(prisma: Db, input: unknown, opts: ImportOptio
       async (tx) => {
         await refuseConflicts(tx, plan);
         await writePlan(tx, plan);
+        await also?.(tx);
       },
       { timeout: 300_000, maxWait: 10_000 },
     );

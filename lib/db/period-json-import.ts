@@ -7,7 +7,8 @@
  * Uploading the same file again changes nothing and says so: the import
  * records the SHA-256 of the bundle's canonical JSON (RFC 8785) in its audit
  * entry, and a period of the same id whose recorded hash, or whose export,
- * matches the upload is that upload. A period of that id holding anything
+ * matches the upload is that upload (the entry is written in the import's own
+ * transaction). A period of that id holding anything
  * else is a conflict, and nothing is written.
  */
 import { AppError, bundleSchema, canonicalJson, invalidInput, sha256Hex } from "../domain/index";
@@ -58,8 +59,9 @@ export async function importJsonFile(text: string, fileName: string, actorUserId
     if (same) return { periodId: id, changed: false, message: `Nothing changed: ${existing.name} holds this file already.`, outsideWindows: [] };
     throw new AppError("conflict", `a bid period with the id "${id}" exists already (${existing.name}) and holds other data; nothing was imported`);
   }
-  const result = await importBundle(db(), parsed.data);
-  await db().auditEvent.create({ data: { actorUserId, action: "period.imported-json", entity: "BidPeriod", entityId: id, detail: { sha256: hash, file: fileName } } });
+  const result = await importBundle(db(), parsed.data, {}, async (tx) => {
+    await tx.auditEvent.create({ data: { actorUserId, action: "period.imported-json", entity: "BidPeriod", entityId: id, detail: { sha256: hash, file: fileName } } });
+  });
   const groups = parsed.data.instances.length;
   return {
     periodId: id,

@@ -37,7 +37,9 @@ export async function openBidding(periodId: string, actorUserId: string, now = n
     if (period.state !== "draft") throw new AppError("conflict", `bidding for ${period.name} has been opened already (it is ${period.state})`);
     if (period._count.pairings === 0 || period._count.groups === 0) throw new AppError("invalid", `${period.name} has no trips or no award groups yet: import them before opening bidding`);
     if (now.getTime() >= period.deadline.getTime()) throw new AppError("invalid", `the deadline of ${period.name} has passed already: set a later one before opening bidding`);
-    // Crew bid in one period at a time: their pages show their base's open period.
+    // Crew bid in one period at a time: their pages show their base's open period. The base row's lock
+    // keeps two schedulers opening two periods of one base at once from both passing this check.
+    await tx.$queryRaw`SELECT id FROM "Base" WHERE id = ${period.baseId} FOR UPDATE`;
     const other = await tx.bidPeriod.findFirst({ where: { baseId: period.baseId, state: "open", id: { not: periodId } }, select: { name: true } });
     if (other) throw new AppError("conflict", `bidding for ${other.name} at this base is still open: close it before opening ${period.name}`);
     await tx.bidPeriod.update({ where: { id: periodId }, data: { state: "open", opensAt: now } });

@@ -8,7 +8,9 @@
  * - Each run must have finished and be fresh: its input hash must equal the
  *   hash of the group's instance exported now. A run made before a bid, a trip
  *   or a crew member changed is stale and refused, naming the group.
- * - Publishing the runs already published is a no-op with a message;
+ * - Publishing the runs already published is a no-op with a message, checked
+ *   before freshness: a later change to the crew list does not make the
+ *   published award "stale";
  *   publishing other runs replaces the award (a correction), audited as such.
  * - The period row is locked for the transaction, so two schedulers
  *   publishing at once publish once.
@@ -38,6 +40,11 @@ export async function publishPeriod(input: { periodId: string; runs: Record<stri
     if (period.state === "draft" || period.state === "open") {
       throw new AppError("conflict", `bidding for ${period.name} is ${period.state === "open" ? "still open" : "not open yet"}: close it before publishing`);
     }
+    // The runs already published, again: nothing to check or change (even if the crew list has changed since).
+    const sameRuns = Object.keys(input.runs).length === period.groups.length && period.groups.every((g) => g.chosenRunId !== null && input.runs[g.id] === g.chosenRunId);
+    if (period.state === "published" && sameRuns) {
+      return { status: "unchanged", message: `${period.name} is already published with these runs; nothing was changed` };
+    }
     const chosen = new Map<string, string>();
     for (const group of period.groups) {
       const label = POSITION[group.position];
@@ -55,9 +62,6 @@ export async function publishPeriod(input: { periodId: string; runs: Record<stri
     }
     const extra = Object.keys(input.runs).filter((g) => !chosen.has(g));
     if (extra.length) throw new AppError("invalid", "a run was chosen for an award group this period does not have");
-    if (period.state === "published" && period.groups.every((g) => g.chosenRunId === chosen.get(g.id))) {
-      return { status: "unchanged", message: `${period.name} is already published with these runs; nothing was changed` };
-    }
     const correction = period.state === "published";
     // A run may be chosen by one group only (chosenRunId is unique): clear, then set.
     await tx.awardGroup.updateMany({ where: { bidPeriodId: period.id }, data: { chosenRunId: null } });

@@ -76,9 +76,11 @@ export interface CrewFiles {
 export function readCrewFiles(crewText: string | undefined, activitiesText: string | undefined, ctx: CrewFilesContext): CrewFiles {
   const problems: ImportProblem[] = [];
   const out: CrewFiles = { problems };
+  const refusedCrew: string[] = [];
   if (crewText !== undefined) {
     const table = readTable("crew.csv", crewText, CREW_COLUMNS, crewRow);
     problems.push(...table.problems);
+    refusedCrew.push(...table.rejected.map((r) => r.value.employee_number ?? ""));
     const byNumber = new Map<string, number>();
     const bySeniority = new Map<number, { line: number; employee: string }>();
     const crew: CrewFileMember[] = [];
@@ -115,8 +117,11 @@ export function readCrewFiles(crewText: string | undefined, activitiesText: stri
     const table = readTable("activities.csv", activitiesText, ACTIVITY_COLUMNS, activityRow);
     problems.push(...table.problems);
     const inFile = new Set(out.crew?.map((c) => c.employeeNumber));
+    // A crew member whose crew.csv row was refused is reported there, not again for each activity.
+    const refused = new Set(refusedCrew);
     const activities = new Map<string, FixedActivity[]>();
     for (const { line, value: a } of table.rows) {
+      if (refused.has(a.employee_number)) continue;
       const known = ctx.known.get(a.employee_number);
       if (!inFile.has(a.employee_number) && (!known || known.baseCode !== ctx.baseCode)) {
         problems.push({ file: "activities.csv", line, column: "employee_number", message: `employee ${a.employee_number} is neither in crew.csv nor on the crew list of ${ctx.baseCode}` });

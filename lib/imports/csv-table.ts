@@ -59,7 +59,9 @@ export function readTable<T>(
   }
   let parsedRecords: Array<{ record: string[]; info: { lines: number } }>;
   try {
-    parsedRecords = parse(text, { bom: true, relax_column_count: true, skip_empty_lines: true, trim: true, info: true, record_delimiter: ["\r\n", "\n", "\r"] }) as unknown as typeof parsedRecords;
+    // Line breaks made one kind first: csv-parse counts a CRLF inside quotes as two lines.
+    const lf = text.replace(/\r\n?/g, "\n");
+    parsedRecords = parse(lf, { bom: true, relax_column_count: true, skip_empty_lines: true, trim: true, info: true }) as unknown as typeof parsedRecords;
   } catch (error) {
     const e = error as { message?: string; lines?: number };
     return { rows: [], rejected: [], unread: true, problems: [{ file, line: e.lines, message: `not a readable CSV file (${e.message ?? String(error)})` }] };
@@ -69,15 +71,16 @@ export function readTable<T>(
   const lines = parsedRecords.map((r) => r.info.lines);
   const header = records[0];
   if (!header) return { rows: [], rejected: [], unread: true, problems: [{ file, message: "the file is empty: it needs a header row and one row per record" }] };
+  const headerLine = lines[0] ?? 1;
   const known = new Set([...columns.required, ...(columns.optional ?? [])]);
   const seen = new Set<string>();
   header.forEach((name, k) => {
-    if (!known.has(name)) problems.push({ file, line: 1, column: name || `#${k + 1}`, message: `unknown column "${name}"; the columns are ${[...known].join(", ")}` });
-    else if (seen.has(name)) problems.push({ file, line: 1, column: name, message: `column "${name}" appears twice` });
+    if (!known.has(name)) problems.push({ file, line: headerLine, column: name || `#${k + 1}`, message: `unknown column "${name}"; the columns are ${[...known].join(", ")}` });
+    else if (seen.has(name)) problems.push({ file, line: headerLine, column: name, message: `column "${name}" appears twice` });
     seen.add(name);
   });
   for (const name of columns.required) {
-    if (!seen.has(name)) problems.push({ file, line: 1, column: name, message: `missing column "${name}"` });
+    if (!seen.has(name)) problems.push({ file, line: headerLine, column: name, message: `missing column "${name}"` });
   }
   if (problems.length > 0) return { rows: [], rejected: [], unread: true, problems };
   const body = records.slice(1);

@@ -94,7 +94,14 @@ export function readTripFiles(tripsText: string, legsText: string, ctx: TripFile
   // A file that could not be read as a table (too big, no header, bad columns) is reported alone.
   if (trips.unread || legs.unread) return { pairings: [], problems };
   const byTrip = tripsById(trips.rows, ctx, problems);
-  const legsOf = legsByTrip(legs.rows, byTrip, ctx, problems);
+  // A trip whose own row was refused is reported there; its legs are not reported again as belonging to no trip.
+  const refusedTrips = new Set(trips.rejected.map((r) => r.value.trip));
+  const legsOf = legsByTrip(
+    legs.rows.filter((r) => !refusedTrips.has(r.value.trip)),
+    byTrip,
+    ctx,
+    problems,
+  );
   // A trip with a rejected row is reported by that row alone: putting it together without the row would only add noise.
   const incomplete = new Set([...trips.rejected, ...legs.rejected, ...legsOf.rejected].map((r) => r.value.trip));
   const placed: Placed[] = [];

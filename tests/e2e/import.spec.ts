@@ -38,16 +38,20 @@ test("a scheduler creates a period and imports its CSV files, with bad rows name
   await upload.getByLabel("crew.csv").setInputFiles(files["crew.csv"]);
   await upload.getByLabel("activities.csv").setInputFiles(files["activities.csv"]);
   await upload.getByRole("button", { name: "Import files" }).click();
-  await expect(upload.getByRole("status")).toHaveText(/^Imported\. trips: 36 added; crew: 12 unchanged; activities: replaced for 1 crew/);
+  await expect(upload.getByRole("status")).toHaveText(/^Imported\. trips: 36 added; crew: 12 unchanged; activities: changed for 1 crew/);
   await expect(page.getByLabel("What the period holds")).toContainText("36 trips");
   await upload.getByRole("button", { name: "Import files" }).click();
   await expect(upload.getByRole("status")).toHaveText("Nothing changed: the files match what the period holds already.");
 
-  // Crew members may not import.
+  // Crew members may not import, nor fetch templates; only a table's own files are templates.
+  const importUrl = new URL(page.url()).pathname.replace(/^\/planning\/periods\//, "/api/periods/");
+  expect((await page.request.get("/api/import-templates/constructor")).status()).toBe(404);
   await page.context().clearCookies();
   await signIn(page, "ines@larkfield.test");
   await expect(page).toHaveURL(/\/trips$/);
-  const refused = await page.request.post(`/api/import-templates/legs.csv`);
-  expect(refused.status()).toBe(405);
+  const asCrew = await page.request.post(importUrl, { multipart: { trips: files["trips.csv"], legs: files["legs.csv"] } });
+  expect(asCrew.status()).toBe(403);
+  expect(await asCrew.json()).toEqual({ error: "Imports are for schedulers." });
+  expect((await page.request.post("/api/periods/import", { multipart: { file: { name: "p.json", mimeType: "application/json", buffer: Buffer.from("{}") } } })).status()).toBe(403);
   expect((await page.request.get("/api/import-templates/legs.csv")).status()).toBe(403);
 });

@@ -123,6 +123,11 @@ describe("creating a period and importing its CSV files", () => {
       ["crew.csv", 4, "position"],
     ]);
     expect(crewProblems[1]!.message).toBe('"navigator" is not a position: use captain, first_officer, purser or flight_attendant');
+    // Leave from 30 January: it would change January, whose bidding is open.
+    const employee = files.crew!.split("\n")[2]!.split(",")[0]!;
+    await expect(importCsvFiles(feb, scheduler, { activities: `employee_number,kind,start_utc,end_utc,label\n${employee},vacation,2027-01-30T07:00:00Z,2027-02-03T07:00:00Z,\n` })).rejects.toThrow(
+      `activities.csv adds employee ${employee}'s vacation from 2027-01-30T07:00:00Z to 2027-02-03T07:00:00Z, which reaches into January 2027 (open) while its bidding is under way; nothing was imported`,
+    );
     expect((await storedTrips(feb)).size).toBe(0);
     expect(await db().auditEvent.count({ where: { entityId: feb, action: "period.imported" } })).toBe(0);
   });
@@ -133,7 +138,7 @@ describe("creating a period and importing its CSV files", () => {
     expect(result.trips).toEqual({ added: pairings.size, changed: 0, removed: 0, unchanged: 0 });
     // The same twelve crew as January's period: all unchanged; the vacationer's leave moves to February.
     expect(result.crew).toEqual({ added: 0, changed: 0, removed: 0, unchanged: 12 });
-    expect(result.activities).toEqual({ replaced: 1, unchanged: 11, rows: 1 });
+    expect(result.activities).toEqual({ replaced: 1, unchanged: 11, rows: 1, kept: 0 });
     expect(result.changed).toBe(true);
     expect(await storedTrips(feb)).toEqual(pairings);
   });
@@ -150,7 +155,7 @@ describe("creating a period and importing its CSV files", () => {
     expect(await db().auditEvent.count({ where: { entityId: feb, action: "period.imported" } })).toBe(1);
   });
 
-  it("applies a changed file as the period's new state: a trip dropped, a crew member's qualification and a seniority swap", async () => {
+  it("applies a changed file as the period's new state (a trip dropped, a qualification, a seniority swap), crew changes only once no other period is under way", async () => {
     const lines = files.trips!.trimEnd().split("\n");
     const dropped = lines[1]!.split(",")[0]!;
     const trips = [lines[0], ...lines.slice(2)].join("\n") + "\n";
@@ -158,7 +163,15 @@ describe("creating a period and importing its CSV files", () => {
     // Swap seniority 1 and 2 and give seniority 3 a language.
     const crew = files.crew!.replace(/,1,HLV,/, ",X,HLV,").replace(/,2,HLV,/, ",1,HLV,").replace(/,X,HLV,/, ",2,HLV,");
     const crew2 = editLine(crew, 4, (l) => l.replace(/,A220(;[^,\n]*)?$/, ",A220;lang:fr"));
+    // While January's bidding is under way its bids and runs use the crew list as it is: crew changes wait.
+    const jan = await db().bidPeriod.findFirstOrThrow({ where: { name: "January 2027" } });
+    await expect(importCsvFiles(feb, scheduler, { trips, legs, crew: crew2 })).rejects.toThrow(
+      /^crew\.csv changes the crew list \(employee \d+ \(line 2\), .*\) while January 2027 \(open\) at this base is between opening and publishing, .* Nothing was imported$/,
+    );
+    expect((await storedTrips(feb)).has(dropped)).toBe(true);
+    await db().bidPeriod.update({ where: { id: jan.id }, data: { state: "published" } });
     const result = await importCsvFiles(feb, scheduler, { trips, legs, crew: crew2 });
+    await db().bidPeriod.update({ where: { id: jan.id }, data: { state: "open" } });
     expect(result.trips).toMatchObject({ added: 0, changed: 0, removed: 1 });
     expect(result.crew).toEqual({ added: 0, changed: 3, removed: 0, unchanged: 9 });
     expect((await storedTrips(feb)).has(dropped)).toBe(false);

@@ -54,8 +54,11 @@ describe("publishing a bid period", { timeout: 120_000 }, () => {
   });
 
   it("publishes every group's run at once, records the reviewer, and crew see their line", async () => {
+    const exportedBefore = sha256Hex(await exportPeriod(db(), periodId));
     const outcome = await publishPeriod({ periodId, runs: first, reviewerId });
     expect(outcome.status).toBe("published");
+    // Publishing writes the ledger, which only later periods read: this period's own export is unchanged.
+    expect(sha256Hex(await exportPeriod(db(), periodId))).toBe(exportedBefore);
     const period = await db().bidPeriod.findUniqueOrThrow({ where: { id: periodId }, include: { groups: true } });
     expect(period.state).toBe("published");
     expect(Object.fromEntries(period.groups.map((g) => [g.id, g.chosenRunId]))).toEqual(first);
@@ -99,6 +102,8 @@ describe("publishing a bid period", { timeout: 120_000 }, () => {
     );
     expect(await db().awardGroup.findMany({ where: { bidPeriodId: periodId }, orderBy: { id: "asc" } })).toEqual(before);
     expect(await auditCount("period.corrected")).toBe(0);
+    // The runs already published are still the award: asked again, publishing says so rather than calling them stale.
+    expect((await publishPeriod({ periodId, runs: first, reviewerId })).status).toBe("unchanged");
   });
 
   it("replaces the award with other fresh runs as a correction, once even when two schedulers publish at once", async () => {

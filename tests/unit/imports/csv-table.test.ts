@@ -20,6 +20,14 @@ describe("readTable", () => {
     ]);
   });
 
+  it("counts a CRLF inside quotes as one line, and finds the header after blank lines", () => {
+    const text = '\r\n\r\nid,n,note\r\na,1,"x\r\ny"\r\nb,0,\r\n';
+    const { rows, problems } = readTable("x.csv", text, columns, schema);
+    expect(rows.map((r) => [r.line, r.value.id])).toEqual([[5, "a"]]);
+    expect(problems).toEqual([{ file: "x.csv", line: 6, column: "n", message: "expected a count of 1 or more" }]);
+    expect(readTable("x.csv", "\n\nid,colour\n", columns, schema).problems[0]).toMatchObject({ line: 3, column: "colour" });
+  });
+
   it("names each bad row's line and column, and rows of the wrong width", () => {
     const { rows, problems, rejected } = readTable("x.csv", "n,id\n0,a\nx,\n5\n", columns, schema);
     expect(rows).toEqual([]);

@@ -9,7 +9,7 @@ export async function GET(_request: Request, context: { params: Promise<{ file: 
   const who = await plannerOrRefusal();
   if ("refusal" in who) return who.refusal;
   const name = (await context.params).file;
-  const template = TEMPLATES[name as keyof typeof TEMPLATES];
+  const template = Object.hasOwn(TEMPLATES, name) ? TEMPLATES[name as keyof typeof TEMPLATES] : undefined;
   if (!template) return NextResponse.json({ error: `There is no template ${name}; there are ${Object.keys(TEMPLATES).join(", ")}.` }, { status: 404 });
   return new NextResponse(template, {
     headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="${name}"`, "cache-control": "no-store" },
