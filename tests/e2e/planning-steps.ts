@@ -21,24 +21,24 @@ export async function setTimeLimit(seconds: number, position?: "captain" | "firs
 }
 
 /**
- * As the scheduler: close January 2027's bidding early (confirmed), run the
+ * As the scheduler: close the period's bidding early (confirmed), run the
  * award for both groups to 100 %, and end on the period page.
  */
-export async function closeAndRunBothGroups(page: Page): Promise<void> {
+export async function closeAndRunBothGroups(page: Page, period = "January 2027"): Promise<void> {
   await signIn(page, "planning@larkfield.test");
   await expect(page).toHaveURL(/\/planning$/);
   // Before the deadline (the server's clock starts on 1 December), closing is "close early", confirmed.
-  await page.getByRole("link", { name: "January 2027" }).click();
+  await page.getByRole("link", { name: period }).click();
   const close = page.getByRole("form", { name: "Close bidding early" });
   await close.getByRole("checkbox").check();
   await close.getByRole("button", { name: "Close bidding early" }).click();
   await expect(page.getByText("State: closed")).toBeVisible();
   for (const group of ["Captains", "First officers"]) {
     await page.goto("/planning");
-    await page.getByRole("link", { name: "January 2027" }).click();
+    await page.getByRole("link", { name: period }).click();
     await page.getByRole("button", { name: `Run award: ${group}` }).click();
     await expect(page.getByRole("progressbar", { name: "Award run progress" })).toHaveAttribute("aria-valuenow", "100", { timeout: 90_000 });
   }
   await page.goto("/planning");
-  await page.getByRole("link", { name: "January 2027" }).click();
+  await page.getByRole("link", { name: period }).click();
 }

@@ -73,18 +73,8 @@ test("the next month end to end: create, import, open, bid, close, run, review, 
   // The scheduler closes early, runs both groups and reviews a run.
   await page.context().clearCookies();
   await setTimeLimit(6);
-  await signIn(page, "planning@larkfield.test");
-  await page.getByRole("link", { name: "February 2027" }).click();
-  const close = page.getByRole("form", { name: "Close bidding early" });
-  await close.getByRole("checkbox").check();
-  await close.getByRole("button", { name: "Close bidding early" }).click();
-  await expect(page.getByText("State: closed")).toBeVisible();
-  for (const group of ["Captains", "First officers"]) {
-    await page.goto("/planning");
-    await page.getByRole("link", { name: "February 2027" }).click();
-    await page.getByRole("button", { name: `Run award: ${group}` }).click();
-    await expect(page.getByRole("progressbar", { name: "Award run progress" })).toHaveAttribute("aria-valuenow", "100", { timeout: 90_000 });
-  }
+  await closeAndRunBothGroups(page, "February 2027");
+  await page.getByRole("region", { name: "First officers" }).getByRole("link", { name: "Open" }).first().click();
   await expect(page.getByRole("img", { name: "Histogram: crew members per satisfaction band" })).toBeVisible({ timeout: 15_000 });
   await expect(page.getByRole("img", { name: "Scatter: satisfaction of each crew member by seniority place" }).locator("circle")).toHaveCount(6);
   await expect(page.getByRole("grid", { name: "Open time by day of the period" }).getByRole("gridcell")).toHaveCount(28);

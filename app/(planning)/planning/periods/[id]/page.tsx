@@ -11,6 +11,7 @@ import { PublishForm } from "./publish-form";
 import { BiddingSteps } from "./bidding-steps";
 import { now } from "@/lib/clock";
 import { elapsed, MODE_LABEL, POSITION_LABEL, POSITION_ONE, STATE_LABEL, STATE_STYLE } from "../../run-labels";
+import { Trail } from "../../trail";
 
 export const metadata: Metadata = { title: "Bid period" };
 
@@ -23,12 +24,7 @@ export default async function PeriodPage({ params }: { params: Promise<{ id: str
   return (
     <section className="space-y-6">
       <div>
-        <p className="text-sm text-slate-500">
-          <Link href="/planning" className="underline">
-            Bid periods
-          </Link>{" "}
-          / {period.baseCode}
-        </p>
+        <Trail steps={[{ label: "Bid periods", href: "/planning" }, { label: period.baseCode }]} />
         <h1 className="text-xl font-semibold">{period.name}</h1>
         <p className="text-sm text-slate-600">
           State: {period.state} · bids close {zonedDateTime(period.deadline, period.zone)} · times in {period.zone} ·{" "}

@@ -6,6 +6,7 @@ import { basesForPeriods } from "@/lib/db/period-create";
 import { addDays } from "@/lib/domain/index";
 import { now } from "@/lib/clock";
 import { CreatePeriodForm } from "./create-form";
+import { Trail } from "../../trail";
 
 export const metadata: Metadata = { title: "New bid period" };
 
@@ -25,12 +26,7 @@ export default async function NewPeriodPage() {
   return (
     <section className="space-y-4">
       <div>
-        <p className="text-sm text-slate-500">
-          <Link href="/planning" className="underline">
-            Bid periods
-          </Link>{" "}
-          / New
-        </p>
+        <Trail steps={[{ label: "Bid periods", href: "/planning" }, { label: "New" }]} />
         <h1 className="text-xl font-semibold">New bid period</h1>
       </div>
       {bases.length === 0 ? (

@@ -7,6 +7,7 @@ import { FILE_HELP } from "@/lib/imports/templates";
 import { IMPORT_LIMITS, megabytes } from "@/lib/imports/limits";
 import { POSITION_LABEL } from "../../../run-labels";
 import { ImportForm } from "./import-form";
+import { Trail } from "../../../trail";
 
 export const metadata: Metadata = { title: "Import trips and crew" };
 
@@ -22,16 +23,7 @@ export default async function ImportPage({ params, searchParams }: { params: Pro
   return (
     <section className="space-y-4">
       <div>
-        <p className="text-sm text-slate-500">
-          <Link href="/planning" className="underline">
-            Bid periods
-          </Link>{" "}
-          /{" "}
-          <Link href={`/planning/periods/${period.id}`} className="underline">
-            {period.name}
-          </Link>{" "}
-          / Import
-        </p>
+        <Trail steps={[{ label: "Bid periods", href: "/planning" }, { label: period.name, href: `/planning/periods/${period.id}` }, { label: "Import" }]} />
         <h1 className="text-xl font-semibold">Import trips and crew</h1>
         {created ? <p role="status" className="text-sm text-emerald-800">{period.name} was created as a draft. Import its trips next.</p> : null}
         <p className="text-sm text-slate-600" aria-label="What the period holds">

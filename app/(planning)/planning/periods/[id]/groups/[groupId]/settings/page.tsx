@@ -1,11 +1,11 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requireRole } from "@/lib/auth/session";
 import { groupSettings } from "@/lib/db/group-settings";
 import { isAppError } from "@/lib/domain/index";
 import { POSITION_LABEL } from "../../../../../run-labels";
 import { SettingsForm } from "./settings-form";
+import { Trail } from "../../../../../trail";
 
 export const metadata: Metadata = { title: "Rule set and settings" };
 
@@ -22,16 +22,7 @@ export default async function GroupSettingsPage({ params }: { params: Promise<{ 
   return (
     <section className="space-y-5">
       <div>
-        <p className="text-sm text-slate-500">
-          <Link href="/planning" className="underline">
-            Bid periods
-          </Link>{" "}
-          /{" "}
-          <Link href={`/planning/periods/${view.period.id}`} className="underline">
-            {view.period.name}
-          </Link>{" "}
-          / {view.period.baseCode}
-        </p>
+        <Trail steps={[{ label: "Bid periods", href: "/planning" }, { label: view.period.name, href: `/planning/periods/${view.period.id}` }, { label: "Rule set and settings" }]} />
         <h1 className="text-xl font-semibold">Rule set and settings · {group}</h1>
         <p className="text-sm text-slate-600">
           {view.period.name} at {view.period.baseCode} · state: {view.period.state}
