@@ -58,6 +58,7 @@ export async function requestRun(
 ): Promise<{ runId: string; instanceHash: string }> {
   const group = await db().awardGroup.findUnique({ where: { id: input.groupId }, select: { id: true, bidPeriodId: true, position: true, bidPeriod: { select: { state: true } } } });
   if (!group) throw new AppError("not_found", `no award group ${input.groupId}`);
+  if (group.bidPeriod.state === "draft") throw new AppError("conflict", "bidding has not opened yet, and a run reads the crew's bids: open bidding first (a preview then runs on the bids submitted so far)");
   if (input.preview && group.bidPeriod.state !== "open") throw new AppError("conflict", "a preview runs while bidding is open; once it is closed, run the award itself");
   const bundle = await exportPeriod(db(), group.bidPeriodId);
   const instance = bundle.instances.find((i) => i.group.position === group.position);

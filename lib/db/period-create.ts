@@ -12,7 +12,7 @@
  * - Periods of one base may not overlap; a period is 1 to 42 days.
  */
 import { z } from "zod";
-import { AppError, addDays, atLocalTime, daysBetween, invalidInput, localDateSchema, localDateTimeLabel, monthLabel, type Position } from "../domain/index";
+import { AppError, addDays, atLocalTime, daysBetween, localDateSchema, localDateTimeLabel, monthLabel, type Position } from "../domain/index";
 import { presetFor, presetRuleSet } from "../rules/index";
 import { db } from "./client";
 import type { DbTx } from "./period-db";
@@ -43,6 +43,16 @@ export const createPeriodInput = z
     if (v.opensDate && v.deadlineDate && v.opensDate > v.deadlineDate) ctx.addIssue({ code: "custom", path: ["opensDate"], message: "bidding must open on or before its deadline" });
   });
 export type CreatePeriodInput = z.input<typeof createPeriodInput>;
+
+const FIELD_LABEL: Record<string, string> = {
+  baseCode: "Base",
+  name: "Name",
+  startDate: "First day",
+  endDate: "Last day",
+  opensDate: "Opens on",
+  deadlineDate: "Deadline date",
+  deadlineTime: "Deadline time",
+};
 
 /** The bases a period can be created for, with their zones. */
 export async function basesForPeriods(): Promise<Array<{ code: string; name: string; zone: string; crew: number }>> {
@@ -79,7 +89,11 @@ export async function ensureGroups(tx: DbTx, periodId: string, positions: Iterab
 /** Creates a draft period; refuses, writing nothing, with AppError("invalid" | "conflict" | "not_found"). */
 export async function createPeriod(input: unknown, actorUserId: string): Promise<{ id: string; message: string }> {
   const parsed = createPeriodInput.safeParse(input);
-  if (!parsed.success) throw invalidInput("the new period", parsed.error);
+  if (!parsed.success) {
+    // Named as the form names them.
+    const lines = parsed.error.issues.map((i) => `${FIELD_LABEL[String(i.path[0])] ?? String(i.path[0])}: ${i.message}`);
+    throw new AppError("invalid", `the new period was not created: ${lines.join("; ")}`, { issues: lines });
+  }
   const v = parsed.data;
   const base = await db().base.findUnique({ where: { stationCode: v.baseCode }, include: { station: true } });
   if (!base) throw new AppError("not_found", `there is no base ${v.baseCode}`);

@@ -60,6 +60,8 @@ export interface ActivityCounts {
   unchanged: number;
   rows: number;
   kept: number;
+  /** the periods under way the kept activities fall in, e.g. "January 2027 (open for bidding)" */
+  keptIn: string[];
 }
 
 /** What an import did. */
@@ -92,7 +94,7 @@ export async function importCsvFiles(periodId: string, actorUserId: string, file
   const given = (Object.keys(files) as Array<keyof CsvFiles>).filter((k) => files[k] !== undefined);
   if (given.length === 0) throw new AppError("invalid", "choose at least one file to import");
   if ((files.trips === undefined) !== (files.legs === undefined)) {
-    throw new AppError("invalid", "trips.csv and legs.csv are imported together: a trip's legs are in legs.csv");
+    throw new AppError("invalid", "import trips.csv and legs.csv together: a trip's legs are in legs.csv");
   }
   const period = await db().bidPeriod.findUnique({ where: { id: periodId }, include: { base: { select: { id: true, stationCode: true } } } });
   if (!period) throw new AppError("not_found", "no such bid period");
@@ -225,8 +227,10 @@ async function writeTrips(tx: DbTx, periodId: string, baseCode: string, pairings
   return counts;
 }
 
-/** "January 2027 (open)" and "February 2027 (closed)". */
-const activeNames = (periods: Active) => periods.map((p) => `${p.name} (${p.state})`).join(" and ");
+const STATE_WORDS: Record<string, string> = { open: "open for bidding", closed: "bidding closed", awarded: "awarded, not yet published" };
+
+/** "January 2027 (open for bidding)" and "February 2027 (bidding closed)". */
+const activeNames = (periods: Active) => periods.map((p) => `${p.name} (${STATE_WORDS[p.state] ?? p.state})`).join(" and ");
 
 async function writeCrew(tx: DbTx, baseId: string, crew: CrewFileMember[], ids: Map<string, string>, active: Active): Promise<Counts> {
   const existing = await tx.crewMember.findMany({ where: { employeeNumber: { in: crew.map((c) => c.employeeNumber) } } });
@@ -251,7 +255,7 @@ async function writeCrew(tx: DbTx, baseId: string, crew: CrewFileMember[], ids: 
     const who = [...updates.map((u) => u.c), ...creates].slice(0, 5).map((c) => `employee ${c.employeeNumber} (line ${c.line})`);
     throw new AppError(
       "conflict",
-      `crew.csv changes the crew list (${who.join(", ")}${updates.length + creates.length > 5 ? " …" : ""}) while ${activeNames(active)} at this base is between opening and publishing, and its bids and runs use the crew as they are; import crew changes once it is published. Nothing was imported`,
+      `the crew list in crew.csv differs (${who.join(", ")}${updates.length + creates.length > 5 ? " …" : ""}) while ${activeNames(active)} at this base is not yet published, and its bids and runs use the crew as they are: import crew changes once it is published. Nothing was imported`,
     );
   }
   // Seniority is unique: park the renumbered crew on free negative numbers first, so a swap never collides.
@@ -287,7 +291,7 @@ async function writeActivities(
   const crew = await tx.crewMember.findMany({ where: { employeeNumber: { in: [...named] } }, select: { id: true, employeeNumber: true } });
   const touching = { startsAt: { lt: new Date(periodEnd) }, endsAt: { gt: new Date(periodStart) } };
   const rows = await tx.fixedActivity.findMany({ where: { crewMemberId: { in: crew.map((c) => c.id) }, ...touching } });
-  const counts: ActivityCounts = { replaced: 0, unchanged: 0, rows: 0, kept: 0 };
+  const counts: ActivityCounts = { replaced: 0, unchanged: 0, rows: 0, kept: 0, keptIn: [] };
   const inserts: Array<{ id: string; crewMemberId: string; kind: FixedActivity["kind"]; startsAt: Date; endsAt: Date; label: string }> = [];
   const removals: string[] = [];
   const reaches = (a: { start: string; end: string }) => active.find((p) => overlaps(a.start, a.end, p.start, p.end));
@@ -305,13 +309,18 @@ async function writeActivities(
       if (hit) {
         throw new AppError(
           "conflict",
-          `activities.csv adds employee ${c.employeeNumber}'s ${a.kind} from ${a.start} to ${a.end}, which reaches into ${hit.name} (${hit.state}) while its bidding is under way; nothing was imported`,
+          `the activities file adds employee ${c.employeeNumber}'s ${a.kind} from ${a.start} to ${a.end}, which reaches into ${hit.name} (${STATE_WORDS[hit.state] ?? hit.state}): that period's bids and runs use the activities as they are; nothing was imported`,
         );
       }
     }
     const kept = gone.filter((n) => reaches(n.activity));
     const removed = gone.filter((n) => !reaches(n.activity));
     counts.kept += kept.length;
+    for (const n of kept) {
+      const p = reaches(n.activity)!;
+      const label = `${p.name} (${STATE_WORDS[p.state] ?? p.state})`;
+      if (!counts.keptIn.includes(label)) counts.keptIn.push(label);
+    }
     if (added.length === 0 && removed.length === 0) {
       counts.unchanged += 1;
       continue;
@@ -334,8 +343,10 @@ function summary(r: CsvImportResult): string {
   if (r.trips) parts.push(`trips: ${counts(r.trips)}`);
   if (r.crew) parts.push(`crew: ${counts(r.crew)}`);
   if (r.activities) {
-    const kept = r.activities.kept ? `, ${r.activities.kept} reaching into a period under way left as they are` : "";
-    parts.push(`activities: changed for ${r.activities.replaced} crew (${r.activities.rows} rows written), ${r.activities.unchanged} unchanged${kept}`);
+    const kept = r.activities.kept
+      ? `; ${r.activities.kept} ${r.activities.kept === 1 ? "activity" : "activities"} not in the file kept, as they also fall in ${r.activities.keptIn.join(" and ")}`
+      : "";
+    parts.push(`activities: ${r.activities.rows} written for ${r.activities.replaced} crew, ${r.activities.unchanged} crew unchanged${kept}`);
   }
   if (r.groupsAdded.length > 0) parts.push(`new award groups: ${r.groupsAdded.join(", ")}`);
   return `Imported. ${parts.join("; ")}.`;

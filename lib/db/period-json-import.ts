@@ -30,13 +30,13 @@ export interface JsonImportResult {
 function readJson(text: string, fileName: string): unknown {
   const size = byteLength(text);
   if (size > IMPORT_LIMITS.jsonBytes) {
-    throw new AppError("too_large", `${fileName} is ${megabytes(size)}; a JSON file may be at most ${megabytes(IMPORT_LIMITS.jsonBytes)}`);
+    throw new AppError("too_large", `the file ${fileName} is ${megabytes(size)}; a JSON file may be at most ${megabytes(IMPORT_LIMITS.jsonBytes)}`);
   }
   let value: unknown;
   try {
     value = JSON.parse(text);
   } catch (error) {
-    throw new AppError("invalid", `${fileName} is not JSON: ${(error as Error).message}`);
+    throw new AppError("invalid", `the file ${fileName} is not JSON (${(error as Error).message}): choose a period file written by "Export as JSON" or the generator`);
   }
   if (typeof value === "object" && value !== null && !("instances" in value) && "group" in value && "period" in value) {
     const instance = value as { schemaVersion?: unknown; period: unknown };
@@ -49,7 +49,7 @@ function readJson(text: string, fileName: string): unknown {
 export async function importJsonFile(text: string, fileName: string, actorUserId: string): Promise<JsonImportResult> {
   const input = readJson(text, fileName);
   const parsed = bundleSchema.safeParse(input);
-  if (!parsed.success) throw invalidInput(fileName, parsed.error);
+  if (!parsed.success) throw invalidInput(`the file ${fileName}`, parsed.error);
   const hash = sha256Hex(parsed.data);
   const id = parsed.data.period.id;
   const existing = await db().bidPeriod.findUnique({ where: { id }, select: { name: true } });

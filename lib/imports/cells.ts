@@ -1,5 +1,14 @@
 /** zod schemas for CSV cells (always text), with the messages a scheduler reads beside the line and column. */
 import { z } from "zod";
+import { instantSchema } from "../domain/index";
+
+/** A UTC instant such as 2027-02-03T06:15:00Z; a bad one is quoted back with how to write it. */
+export const instantCell = z.string().transform((text, ctx) => {
+  const parsed = instantSchema.safeParse(text);
+  if (parsed.success) return parsed.data;
+  ctx.addIssue({ code: "custom", message: `"${text}" is not a UTC instant: write it like 2027-03-14T08:00:00Z (a real date, 24-hour time, ending in Z)` });
+  return z.NEVER;
+});
 
 /** A whole number of minutes, such as 540. */
 export const minutesCell = z

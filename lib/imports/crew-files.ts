@@ -4,8 +4,8 @@
  * database already holds comes in through the context.
  */
 import { z } from "zod";
-import { crewIdSchema, fixedActivitySchema, instantSchema, overlaps, positionSchema, stationCodeSchema, type FixedActivity, type Position } from "../domain/index";
-import { listCell, wholeCell } from "./cells";
+import { crewIdSchema, fixedActivitySchema, overlaps, positionSchema, stationCodeSchema, type FixedActivity, type Position } from "../domain/index";
+import { instantCell, listCell, wholeCell } from "./cells";
 import { readTable, type ImportProblem } from "./csv-table";
 
 export const CREW_COLUMNS = {
@@ -39,8 +39,8 @@ const activityRow = z.object({
     ctx.addIssue({ code: "custom", message: `"${s}" is not an activity kind: use vacation, training, medical, office or other` });
     return z.NEVER;
   }),
-  start_utc: instantSchema,
-  end_utc: instantSchema,
+  start_utc: instantCell,
+  end_utc: instantCell,
   label: z.string().max(120, "a label has at most 120 characters").optional(),
 });
 

@@ -6,9 +6,8 @@
  */
 import { z } from "zod";
 import { localDate, pairingIdSchema, pairingSchema, positions, stationCodeSchema, type Pairing, type Position } from "../domain/index";
-import { listCell, minutesCell, wholeCell, yesNoCell } from "./cells";
+import { instantCell, listCell, minutesCell, wholeCell, yesNoCell } from "./cells";
 import { readTable, type ImportProblem, type Row } from "./csv-table";
-import { instantSchema } from "../domain/index";
 
 export const TRIP_COLUMNS = {
   required: ["trip", "base", "block_minutes", "credit_minutes", "away_minutes", "need_captain", "need_first_officer", "need_purser", "need_flight_attendant", "requires"],
@@ -36,14 +35,14 @@ type TripRow = z.infer<typeof tripRow>;
 const legRow = z.object({
   trip: pairingIdSchema,
   duty: wholeCell(1, "a duty number"),
-  report_utc: instantSchema,
-  release_utc: instantSchema,
+  report_utc: instantCell,
+  release_utc: instantCell,
   leg: wholeCell(1, "a leg number"),
   flight: z.string().min(1, "a leg needs a flight number").max(10, "a flight number has at most 10 characters"),
   from: stationCodeSchema,
   to: stationCodeSchema,
-  departs_utc: instantSchema,
-  arrives_utc: instantSchema,
+  departs_utc: instantCell,
+  arrives_utc: instantCell,
   deadhead: yesNoCell,
   block_minutes: minutesCell,
   equipment: z.string().optional(),
@@ -93,6 +92,11 @@ export function readTripFiles(tripsText: string, legsText: string, ctx: TripFile
   const problems = [...trips.problems, ...legs.problems];
   // A file that could not be read as a table (too big, no header, bad columns) is reported alone.
   if (trips.unread || legs.unread) return { pairings: [], problems };
+  if (trips.rows.length === 0 && trips.rejected.length === 0) {
+    // The files say what the period holds: an empty trips.csv (a template, say) would remove every trip.
+    problems.push({ file: "trips.csv", message: "the file holds no trips, only its header: a period's trips come from it, so importing it would remove them all" });
+    return { pairings: [], problems };
+  }
   const byTrip = tripsById(trips.rows, ctx, problems);
   // A trip whose own row was refused is reported there; its legs are not reported again as belonging to no trip.
   const refusedTrips = new Set(trips.rejected.map((r) => r.value.trip));
@@ -155,7 +159,7 @@ function legsByTrip(
     }
     for (const column of ["from", "to"] as const) {
       if (!ctx.stations.has(leg[column])) {
-        problems.push({ file: "legs.csv", line: row.line, column, message: `station ${leg[column]} is unknown: Bidwright has no time zone for it (add it with a JSON import first)` });
+        problems.push({ file: "legs.csv", line: row.line, column, message: `Bidwright does not know station ${leg[column]}, so it has no time zone for it: check the code (new stations come with a JSON import of a period that uses them)` });
         ok = false;
       }
     }

@@ -29,6 +29,19 @@ describe("the award job", { timeout: 180_000 }, () => {
     await boss.stop({ graceful: false });
   });
 
+  it("refuses a run before bidding opens, queueing nothing", async () => {
+    const groupId = await groupWithLimit("captain", 5);
+    const group = await db().awardGroup.findUniqueOrThrow({ where: { id: groupId }, select: { bidPeriodId: true, bidPeriod: { select: { state: true } } } });
+    const runs = await db().awardRun.count();
+    await db().bidPeriod.update({ where: { id: group.bidPeriodId }, data: { state: "draft" } });
+    try {
+      await expect(requestRun(boss, { groupId })).rejects.toThrow("bidding has not opened yet, and a run reads the crew's bids");
+    } finally {
+      await db().bidPeriod.update({ where: { id: group.bidPeriodId }, data: { state: group.bidPeriod.state } });
+    }
+    expect(await db().awardRun.count()).toBe(runs);
+  });
+
   it("lets only one claimer take a run (the run row is the lock)", async () => {
     const { runId } = await requestRun(boss, { groupId: await groupWithLimit("captain", 5) });
     const claims = await Promise.all([claimRun(runId), claimRun(runId), claimRun(runId)]);

@@ -62,6 +62,7 @@ describe("the demo seed", () => {
     expect(result.crew).toEqual({ added: 0, changed: 0, removed: 0, unchanged: crewCount });
     // January is open: leave that reaches into it from February stays as January's data has it.
     expect(result.activities!.kept).toBeGreaterThan(0);
+    expect(result.activities!.keptIn).toEqual(["January 2027 (open for bidding)"]);
     const again = await importCsvFiles(id, scheduler, { trips: read("trips.csv"), legs: read("legs.csv"), crew: read("crew.csv"), activities: read("activities.csv") });
     expect(again.changed).toBe(false);
     expect(result.trips!.added).toBe(read("trips.csv").trimEnd().split("\n").length - 1);

@@ -90,7 +90,7 @@ describe("creating a period and importing its CSV files", () => {
     // a bad time on line 5 of legs.csv
     const badTime = editLine(legs, 5, (l) => l.replace(/,(\d{4}-\d\d-\d\dT[\d:]+Z),(\d{4}-\d\d-\d\dT[\d:]+Z),(yes|no),/, ",2027-02-30T25:10:00Z,$2,$3,"));
     expect(await refused(feb, { ...files, legs: badTime })).toEqual([
-      { file: "legs.csv", line: 5, column: "departs_utc", message: "expected a UTC instant such as 2027-03-14T08:00:00Z" },
+      { file: "legs.csv", line: 5, column: "departs_utc", message: '"2027-02-30T25:10:00Z" is not a UTC instant: write it like 2027-03-14T08:00:00Z (a real date, 24-hour time, ending in Z)' },
     ]);
     // an unknown station on line 3
     const unknown = editLine(legs, 3, (l) => {
@@ -99,13 +99,18 @@ describe("creating a period and importing its CSV files", () => {
       return cells.join(",");
     });
     expect(await refused(feb, { ...files, legs: unknown })).toEqual([
-      { file: "legs.csv", line: 3, column: "to", message: "station QQQ is unknown: Bidwright has no time zone for it (add it with a JSON import first)" },
+      { file: "legs.csv", line: 3, column: "to", message: "Bidwright does not know station QQQ, so it has no time zone for it: check the code (new stations come with a JSON import of a period that uses them)" },
     ]);
     // a trip number twice: line 2's trip again at the end
     const twice = trips.trimEnd() + "\n" + trips.split("\n")[1]! + "\n";
     const last = twice.trimEnd().split("\n").length;
     expect(await refused(feb, { ...files, trips: twice })).toEqual([
       { file: "trips.csv", line: last, column: "trip", message: `trip ${trips.split("\n")[1]!.split(",")[0]} appears twice (first on line 2); a trip number is unique in the period` },
+    ]);
+    // the templates alone: trips.csv with no trips would remove them all
+    const header = (t: string) => t.split("\n")[0] + "\n";
+    expect(await refused(feb, { trips: header(trips), legs: header(legs) })).toEqual([
+      { file: "trips.csv", message: "the file holds no trips, only its header: a period's trips come from it, so importing it would remove them all" },
     ]);
     // a 5 MB legs.csv
     const big = legs + legs.split("\n").slice(1).join("\n").repeat(Math.ceil((5 * 1024 * 1024) / legs.length) + 1);
@@ -126,7 +131,7 @@ describe("creating a period and importing its CSV files", () => {
     // Leave from 30 January: it would change January, whose bidding is open.
     const employee = files.crew!.split("\n")[2]!.split(",")[0]!;
     await expect(importCsvFiles(feb, scheduler, { activities: `employee_number,kind,start_utc,end_utc,label\n${employee},vacation,2027-01-30T07:00:00Z,2027-02-03T07:00:00Z,\n` })).rejects.toThrow(
-      `activities.csv adds employee ${employee}'s vacation from 2027-01-30T07:00:00Z to 2027-02-03T07:00:00Z, which reaches into January 2027 (open) while its bidding is under way; nothing was imported`,
+      `the activities file adds employee ${employee}'s vacation from 2027-01-30T07:00:00Z to 2027-02-03T07:00:00Z, which reaches into January 2027 (open for bidding): that period's bids and runs use the activities as they are; nothing was imported`,
     );
     expect((await storedTrips(feb)).size).toBe(0);
     expect(await db().auditEvent.count({ where: { entityId: feb, action: "period.imported" } })).toBe(0);
@@ -138,7 +143,7 @@ describe("creating a period and importing its CSV files", () => {
     expect(result.trips).toEqual({ added: pairings.size, changed: 0, removed: 0, unchanged: 0 });
     // The same twelve crew as January's period: all unchanged; the vacationer's leave moves to February.
     expect(result.crew).toEqual({ added: 0, changed: 0, removed: 0, unchanged: 12 });
-    expect(result.activities).toEqual({ replaced: 1, unchanged: 11, rows: 1, kept: 0 });
+    expect(result.activities).toEqual({ replaced: 1, unchanged: 11, rows: 1, kept: 0, keptIn: [] });
     expect(result.changed).toBe(true);
     expect(await storedTrips(feb)).toEqual(pairings);
   });
@@ -166,7 +171,7 @@ describe("creating a period and importing its CSV files", () => {
     // While January's bidding is under way its bids and runs use the crew list as it is: crew changes wait.
     const jan = await db().bidPeriod.findFirstOrThrow({ where: { name: "January 2027" } });
     await expect(importCsvFiles(feb, scheduler, { trips, legs, crew: crew2 })).rejects.toThrow(
-      /^crew\.csv changes the crew list \(employee \d+ \(line 2\), .*\) while January 2027 \(open\) at this base is between opening and publishing, .* Nothing was imported$/,
+      /^the crew list in crew\.csv differs \(employee \d+ \(line 2\), .*\) while January 2027 \(open for bidding\) at this base is not yet published, .* Nothing was imported$/,
     );
     expect((await storedTrips(feb)).has(dropped)).toBe(true);
     await db().bidPeriod.update({ where: { id: jan.id }, data: { state: "published" } });
@@ -184,7 +189,7 @@ describe("creating a period and importing its CSV files", () => {
   it("refuses imports once bidding is open, and a second open period at the base", async () => {
     const jan = await db().bidPeriod.findFirstOrThrow({ where: { name: "January 2027" } });
     await expect(importCsvFiles(jan.id, scheduler, files)).rejects.toThrow("imports change a period only while it is a draft, and January 2027 is open: crew bid on its trips as they are");
-    await expect(importCsvFiles(feb, scheduler, { trips: files.trips })).rejects.toThrow(/imported together/);
+    await expect(importCsvFiles(feb, scheduler, { trips: files.trips })).rejects.toThrow("import trips.csv and legs.csv together: a trip's legs are in legs.csv");
     // February has its trips now, but January's bidding is still open at the base.
     await expect(openBidding(feb, scheduler, DEC_1)).rejects.toThrow("bidding for January 2027 at this base is still open: close it before opening February 2027");
   });

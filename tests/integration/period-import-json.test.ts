@@ -57,9 +57,9 @@ describe("importing a period from JSON", () => {
   });
 
   it("names the place of a syntax error or a schema problem", async () => {
-    await expect(importJsonFile('{"schemaVersion": 1, "period": ', "broken.json", actor)).rejects.toThrow(/^broken\.json is not JSON: /);
+    await expect(importJsonFile('{"schemaVersion": 1, "period": ', "broken.json", actor)).rejects.toThrow(/^the file broken\.json is not JSON \(.+\): choose a period file written by "Export as JSON" or the generator$/);
     const bad = structuredClone(bundle);
     (bad.instances[1]!.pairings[2]!.dutyPeriods[0]!.legs[0] as { departure: string }).departure = "2027-01-32T08:00:00Z";
-    await expect(importJsonFile(JSON.stringify(bad), "bad.json", actor)).rejects.toThrow(/bad\.json is not valid: instances\[1\]\.pairings\[2\]\.dutyPeriods\[0\]\.legs\[0\]\.departure: expected a UTC instant/);
+    await expect(importJsonFile(JSON.stringify(bad), "bad.json", actor)).rejects.toThrow(/the file bad\.json is not valid: instances\[1\]\.pairings\[2\]\.dutyPeriods\[0\]\.legs\[0\]\.departure: expected a UTC instant/);
   });
 });

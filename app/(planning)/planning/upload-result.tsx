@@ -48,7 +48,7 @@ export function UploadResult({ answer }: { answer: UploadAnswer | undefined }) {
                 <tr key={k} className="border-t border-red-100">
                   <td className="whitespace-nowrap px-2 py-1 font-mono">{p.file ?? ""}</td>
                   <td className="px-2 py-1 text-right tabular-nums">{p.line ?? ""}</td>
-                  <td className="break-all px-2 py-1 font-mono">{p.column ?? ""}</td>
+                  <td className="break-words px-2 py-1 font-mono">{p.column ?? ""}</td>
                   <td className="px-2 py-1">{p.message}</td>
                 </tr>
               ))}

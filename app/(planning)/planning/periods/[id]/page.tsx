@@ -58,7 +58,9 @@ export default async function PeriodPage({ params }: { params: Promise<{ id: str
                 </Link>
               </p>
             </div>
-            {period.state === "open" ? (
+            {period.state === "draft" ? (
+              <p className="text-sm text-slate-600">Runs start once bidding opens.</p>
+            ) : period.state === "open" ? (
               <RunAwardButton groupId={g.id} preview label={`Run preview: ${POSITION_LABEL[g.position] ?? g.position}`} />
             ) : (
               <RunAwardButton groupId={g.id} label={`Run award: ${POSITION_LABEL[g.position] ?? g.position}`} />
@@ -116,7 +118,9 @@ export default async function PeriodPage({ params }: { params: Promise<{ id: str
           )}
         </section>
       ))}
-      {period.state === "closed" || period.state === "awarded" || period.state === "published" ? (
+      {period.groups.length === 0 ? (
+        <p className="text-sm text-slate-600">This period has no award groups, so there is nothing to run or publish.</p>
+      ) : period.state === "closed" || period.state === "awarded" || period.state === "published" ? (
         <PublishForm
           periodId={period.id}
           published={period.state === "published"}

@@ -5,10 +5,13 @@ import { requireRole } from "@/lib/auth/session";
 import { createPeriod } from "@/lib/db/period-create";
 import { errorMessage } from "@/app/ui/error-message";
 
-export type CreateState = { status: "refused"; message: string } | undefined;
+/** A refusal, with what was typed so the form shows it again. */
+export type CreateState = { status: "refused"; message: string; values: Record<string, string>; attempt: number } | undefined;
+
+const FIELDS = ["baseCode", "name", "startDate", "endDate", "deadlineDate", "deadlineTime"] as const;
 
 /** "Create period": a draft for the chosen base; then its import page. */
-export async function createPeriodAction(_previous: CreateState, form: FormData): Promise<CreateState> {
+export async function createPeriodAction(previous: CreateState, form: FormData): Promise<CreateState> {
   const user = await requireRole("scheduler", "admin");
   const text = (name: string) => {
     const v = form.get(name);
@@ -22,14 +25,14 @@ export async function createPeriodAction(_previous: CreateState, form: FormData)
         name: text("name"),
         startDate: text("startDate") ?? "",
         endDate: text("endDate") ?? "",
-        opensDate: text("opensDate"),
         deadlineDate: text("deadlineDate"),
         deadlineTime: text("deadlineTime"),
       },
       user.id,
     ));
   } catch (error) {
-    return { status: "refused", message: errorMessage(error) };
+    const values = Object.fromEntries(FIELDS.map((f) => [f, text(f) ?? ""]));
+    return { status: "refused", message: errorMessage(error), values, attempt: (previous?.attempt ?? 0) + 1 };
   }
   redirect(`/planning/periods/${id}/import?created=1`);
 }

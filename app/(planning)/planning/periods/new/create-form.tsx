@@ -8,11 +8,13 @@ const field = "mt-1 block w-full rounded-md border border-slate-300 px-2 py-1.5"
 
 export function CreatePeriodForm({ bases, startDate, endDate }: { bases: Array<{ code: string; name: string; zone: string; crew: number }>; startDate: string; endDate: string }) {
   const [state, action, pending] = useActionState(createPeriodAction, undefined);
+  // After a refusal the form is drawn again (a new key) with what was typed.
+  const v = (name: string, fallback = "") => state?.values[name] ?? fallback;
   return (
-    <form action={action} aria-label="New bid period" className="max-w-xl space-y-4 rounded-lg border border-slate-200 bg-white p-4">
+    <form key={state?.attempt ?? 0} action={action} aria-label="New bid period" className="max-w-xl space-y-4 rounded-lg border border-slate-200 bg-white p-4">
       <label className="block text-sm font-medium">
         Base
-        <select name="baseCode" required className={field} defaultValue={bases[0]?.code}>
+        <select name="baseCode" required className={field} defaultValue={v("baseCode", bases[0]?.code)}>
           {bases.map((b) => (
             <option key={b.code} value={b.code}>
               {b.code} · {b.name} ({b.zone}, {b.crew} crew)
@@ -23,32 +25,30 @@ export function CreatePeriodForm({ bases, startDate, endDate }: { bases: Array<{
       <div className="grid gap-3 sm:grid-cols-2">
         <label className="block text-sm font-medium">
           First day
-          <input type="date" name="startDate" required defaultValue={startDate} className={field} />
+          <input type="date" name="startDate" required defaultValue={v("startDate", startDate)} className={field} />
         </label>
         <label className="block text-sm font-medium">
           Last day
-          <input type="date" name="endDate" required defaultValue={endDate} className={field} />
+          <input type="date" name="endDate" required defaultValue={v("endDate", endDate)} className={field} />
         </label>
       </div>
       <label className="block text-sm font-medium">
         Name <span className="font-normal text-slate-500">(optional; a calendar month is named after itself)</span>
-        <input type="text" name="name" maxLength={80} className={field} />
+        <input type="text" name="name" maxLength={80} defaultValue={v("name")} className={field} />
       </label>
       <fieldset className="space-y-2">
-        <legend className="text-sm font-medium">Bidding window, base local time</legend>
-        <p className="text-sm text-slate-600">Leave these empty for the usual window: bidding opens on the same day of the month before and closes 19 days later at 18:00.</p>
-        <div className="grid gap-3 sm:grid-cols-3">
-          <label className="block text-sm">
-            Opens on
-            <input type="date" name="opensDate" className={field} />
-          </label>
+        <legend className="text-sm font-medium">Bidding deadline, base local time</legend>
+        <p className="text-sm text-slate-600">
+          Leave these empty for the usual deadline: 18:00, 19 days after the first day&apos;s date in the month before (the 20th of the month before, for a period starting on the 1st). Bidding opens when you open it on the period&apos;s page.
+        </p>
+        <div className="grid gap-3 sm:grid-cols-2">
           <label className="block text-sm">
             Deadline date
-            <input type="date" name="deadlineDate" className={field} />
+            <input type="date" name="deadlineDate" defaultValue={v("deadlineDate")} className={field} />
           </label>
           <label className="block text-sm">
             Deadline time
-            <input type="time" name="deadlineTime" className={field} />
+            <input type="time" name="deadlineTime" defaultValue={v("deadlineTime")} className={field} />
           </label>
         </div>
       </fieldset>

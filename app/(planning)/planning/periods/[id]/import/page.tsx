@@ -39,7 +39,8 @@ export default async function ImportPage({ params, searchParams }: { params: Pro
         </p>
       )}
       <p className="text-sm text-slate-600">
-        Columns, units and time zones: docs/csv-format.md in the project. Times are UTC with a Z, durations whole minutes, lists joined by &ldquo;;&rdquo;.
+        Each template is a file&apos;s header row. Times are UTC, written like 2027-03-14T08:00:00Z; durations are whole minutes; lists are joined by &ldquo;;&rdquo;, such as
+        A220;lang:es. The full description is docs/csv-format.md in the project.
       </p>
       <p>
         <Link href={`/planning/periods/${period.id}`} className="text-sky-800 underline">
