@@ -8,7 +8,15 @@ test("a scheduler creates a period and imports its CSV files, with bad rows name
   const files = monthFiles("2027-02-01");
   await signIn(page, "planning@larkfield.test");
   await page.getByRole("link", { name: "New period" }).click();
-  const form = page.getByRole("form", { name: "New bid period" });
+  let form = page.getByRole("form", { name: "New bid period" });
+  // Dates the wrong way round: refused by field name, with what was typed still in the form.
+  await form.getByLabel("First day").fill("2027-03-31");
+  await form.getByLabel("Last day").fill("2027-03-01");
+  await form.getByRole("button", { name: "Create period" }).click();
+  await expect(form.getByRole("alert")).toHaveText("The new period was not created: Last day: the last day is before the first day.");
+  form = page.getByRole("form", { name: "New bid period" });
+  await expect(form.getByLabel("First day")).toHaveValue("2027-03-31");
+  await expect(form.getByLabel("Last day")).toHaveValue("2027-03-01");
   await form.getByLabel("First day").fill("2027-03-01");
   await form.getByLabel("Last day").fill("2027-03-31");
   await form.getByRole("button", { name: "Create period" }).click();
