@@ -34,22 +34,26 @@ export function UploadResult({ answer }: { answer: UploadAnswer | undefined }) {
       </p>
       {answer.problems.length > 0 ? (
         <div className="overflow-x-auto rounded-md border border-red-200">
-          <table aria-label="Problems in the files" className="w-full text-left text-xs sm:text-sm">
+          <table aria-label="Problems in the files" className="w-full text-left text-sm">
             <thead className="bg-red-50 text-xs uppercase tracking-wide text-red-900">
               <tr>
-                <th className="px-2 py-1 font-medium">File</th>
-                <th className="px-2 py-1 text-right font-medium">Line</th>
-                <th className="px-2 py-1 font-medium">Column</th>
+                <th className="px-2 py-1 font-medium max-sm:hidden">File</th>
+                <th className="px-2 py-1 text-right font-medium max-sm:hidden">Line</th>
+                <th className="px-2 py-1 font-medium max-sm:hidden">Column</th>
                 <th className="px-2 py-1 font-medium">Problem</th>
               </tr>
             </thead>
             <tbody>
               {answer.problems.map((p, k) => (
                 <tr key={k} className="border-t border-red-100">
-                  <td className="whitespace-nowrap px-2 py-1 font-mono">{p.file ?? ""}</td>
-                  <td className="px-2 py-1 text-right tabular-nums">{p.line ?? ""}</td>
-                  <td className="break-words px-2 py-1 font-mono">{p.column ?? ""}</td>
-                  <td className="px-2 py-1">{p.message}</td>
+                  <td className="whitespace-nowrap px-2 py-1 font-mono max-sm:hidden">{p.file ?? ""}</td>
+                  <td className="px-2 py-1 text-right tabular-nums max-sm:hidden">{p.line ?? ""}</td>
+                  <td className="px-2 py-1 font-mono max-sm:hidden">{p.column ?? ""}</td>
+                  <td className="px-2 py-1">
+                    {/* On a phone the place goes above the problem, as one line. */}
+                    <span className="block font-mono text-red-900 sm:hidden">{[p.file, p.line === undefined ? undefined : `line ${p.line}`, p.column].filter(Boolean).join(" · ")}</span>
+                    {p.message}
+                  </td>
                 </tr>
               ))}
             </tbody>
