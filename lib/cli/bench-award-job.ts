@@ -40,6 +40,8 @@ const { demoBundle } = await import("../../seed/demo.ts");
 const { generatePeriod } = await import("../../seed/generator/generate-period.ts");
 
 const NOW = new Date("2026-12-01T12:00:00Z");
+const commit = execSync("git rev-parse --short HEAD").toString().trim();
+const started = new Date().toISOString().slice(0, 16);
 const periods = [
   { label: "demo period (64 crew, 120 s limit)", bundle: demoBundle(NOW).bundle },
   { label: "generated 150 crew (default limit)", bundle: generatePeriod({ seed: 11, crew: 75, base: "HLV", startDate: "2027-03-01", days: 31 }) },
@@ -88,7 +90,6 @@ const table = [
 ].join("\n");
 console.log(`\n${table}`);
 if (opts.out) {
-  const commit = execSync("git rev-parse --short HEAD").toString().trim();
-  const head = `# The award job: "Run award" to results\n\nWritten by \`npm run bench:job\` (lib/cli/bench-award-job.ts) at ${commit}, ${new Date().toISOString().slice(0, 16)} UTC, Node ${process.version}: each group through requestRun, pg-boss and one worker, one group after another. "Request" is the export, hash and send; "queued → claimed" the wait for the worker; the last column the time a scheduler waits. The engine stops at its time limit unless it proves the award first.\n\n`;
+  const head = `# The award job: "Run award" to results\n\nWritten by \`npm run bench:job\` (lib/cli/bench-award-job.ts) at ${commit}, from ${started} to ${new Date().toISOString().slice(11, 16)} UTC, Node ${process.version}: each group through requestRun, pg-boss and one worker, one group after another. "Request" is the export, hash and send; "queued → claimed" the wait for the worker; the last column the time a scheduler waits. The engine stops at its time limit unless it proves the award first.\n\n`;
   fs.writeFileSync(opts.out, `${head}${table}\n`);
 }
