@@ -137,8 +137,7 @@ export async function importCsvFiles(periodId: string, actorUserId: string, file
         const active = await activePeriods(tx, period.base.id, periodId);
         const result: CsvImportResult = { groupsAdded: [], changed: false, message: "" };
         if (pairings) result.trips = await writeTrips(tx, periodId, baseCode, pairings);
-        const ids = new Map<string, string>();
-        if (crewFiles?.crew) result.crew = await writeCrew(tx, period.base.id, crewFiles.crew, ids, active);
+        if (crewFiles?.crew) result.crew = await writeCrew(tx, period.base.id, crewFiles.crew, active);
         if (crewFiles?.activities) {
           const named = new Set([...crewFiles.activities.keys(), ...(crewFiles.crew ?? []).map((c) => c.employeeNumber)]);
           result.activities = await writeActivities(tx, named, crewFiles.activities, periodStart, periodEnd, active);
@@ -232,7 +231,7 @@ const STATE_WORDS: Record<string, string> = { open: "open for bidding", closed: 
 /** "January 2027 (open for bidding)" and "February 2027 (bidding closed)". */
 const activeNames = (periods: Active) => periods.map((p) => `${p.name} (${STATE_WORDS[p.state] ?? p.state})`).join(" and ");
 
-async function writeCrew(tx: DbTx, baseId: string, crew: CrewFileMember[], ids: Map<string, string>, active: Active): Promise<Counts> {
+async function writeCrew(tx: DbTx, baseId: string, crew: CrewFileMember[], active: Active): Promise<Counts> {
   const existing = await tx.crewMember.findMany({ where: { employeeNumber: { in: crew.map((c) => c.employeeNumber) } } });
   const byNumber = new Map(existing.map((r) => [r.employeeNumber, r]));
   const counts: Counts = { added: 0, changed: 0, removed: 0, unchanged: 0 };
@@ -244,7 +243,6 @@ async function writeCrew(tx: DbTx, baseId: string, crew: CrewFileMember[], ids: 
       creates.push(c);
       continue;
     }
-    ids.set(c.employeeNumber, row.id);
     const same = row.name === c.name && row.seniority === c.seniority && row.position === c.position && canonicalJson(row.qualifications) === canonicalJson(c.qualifications);
     if (same) counts.unchanged += 1;
     else updates.push({ id: row.id, c });
@@ -266,9 +264,7 @@ async function writeCrew(tx: DbTx, baseId: string, crew: CrewFileMember[], ids: 
     counts.changed += 1;
   }
   for (const c of creates) {
-    const id = randomUUID();
-    ids.set(c.employeeNumber, id);
-    await tx.crewMember.create({ data: { id, employeeNumber: c.employeeNumber, name: c.name, seniority: c.seniority, baseId, position: c.position, qualifications: c.qualifications } });
+    await tx.crewMember.create({ data: { id: randomUUID(), employeeNumber: c.employeeNumber, name: c.name, seniority: c.seniority, baseId, position: c.position, qualifications: c.qualifications } });
     counts.added += 1;
   }
   return counts;
