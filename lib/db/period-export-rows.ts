@@ -17,6 +17,7 @@ import type {
 } from "./generated/client";
 import type { Db, DbTx } from "./period-db";
 import { periodWindows, type PeriodWindows } from "./period-windows";
+import { latestEarlierEntries } from "./ledger-rows";
 
 const periodInclude = {
   base: true,
@@ -121,16 +122,10 @@ async function loadCrew(tx: DbTx, where: Prisma.CrewMemberWhereInput, w: PeriodW
     await tx.dailyFlightTotal.findMany({ where: { ...ids, date: { gte: dateColumn(w.dailyFrom), lt: startDate } } }),
   );
   // The fairness ledger's weight from the latest earlier published period overrides the stored one (lib/fairness/ledger.ts).
-  const ledger = await tx.fairnessEntry.findMany({
-    where: { ...ids, bidPeriod: { startDate: { lt: startDate } } },
-    orderBy: { bidPeriod: { startDate: "desc" } },
-    select: { crewMemberId: true, carriedWeight: true },
-  });
-  const carried = new Map<string, number>();
-  for (const e of ledger) if (!carried.has(e.crewMemberId)) carried.set(e.crewMemberId, e.carriedWeight);
+  const carried = await latestEarlierEntries(tx, crew.map((member) => member.id), startDate);
   return crew.map((member) => ({
     ...member,
-    carriedWeight: carried.get(member.id) ?? member.carriedWeight,
+    carriedWeight: carried.get(member.id)?.carriedWeight ?? member.carriedWeight,
     activities: activities.get(member.id) ?? [],
     carryIn: carryIn.get(member.id) ?? [],
     pastDuties: pastDuties.get(member.id) ?? [],

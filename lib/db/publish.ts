@@ -23,6 +23,7 @@ import { AppError, sha256Hex } from "../domain/index";
 import { ledgerFor } from "../fairness/index";
 import { db } from "./client";
 import type { DbTx } from "./period-db";
+import { latestEarlierEntries } from "./ledger-rows";
 import { exportPeriod } from "./period-export";
 
 export type PublishOutcome = { status: "published" | "corrected" | "unchanged"; message: string };
@@ -95,13 +96,8 @@ export async function publishPeriod(input: { periodId: string; runs: Record<stri
 async function writeLedger(tx: DbTx, periodId: string, startDate: Date, runIds: string[]): Promise<void> {
   await tx.fairnessEntry.deleteMany({ where: { bidPeriodId: periodId } });
   const lines = await tx.awardedLine.findMany({ where: { awardRunId: { in: runIds } }, select: { awardRunId: true, crewMemberId: true, satisfaction: true } });
-  const earlier = await tx.fairnessEntry.findMany({
-    where: { crewMemberId: { in: lines.map((l) => l.crewMemberId) }, bidPeriod: { startDate: { lt: startDate } } },
-    orderBy: { bidPeriod: { startDate: "desc" } },
-    select: { crewMemberId: true, balance: true },
-  });
-  const previous = new Map<string, number>();
-  for (const e of earlier) if (!previous.has(e.crewMemberId)) previous.set(e.crewMemberId, e.balance);
+  const earlier = await latestEarlierEntries(tx, lines.map((l) => l.crewMemberId), startDate);
+  const previous = new Map([...earlier].map(([id, e]) => [id, e.balance]));
   for (const runId of runIds) {
     const steps = ledgerFor(lines.filter((l) => l.awardRunId === runId), previous);
     await tx.fairnessEntry.createMany({

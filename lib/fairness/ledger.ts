@@ -15,6 +15,8 @@
  * keeps one crew member's weight within a factor of 2 of anyone's.
  */
 
+import { mean } from "./measures.ts";
+
 export const LEDGER = { decay: 0.5, gain: 1, minWeight: 0.5, maxWeight: 2 } as const;
 
 export interface LedgerStep {
@@ -34,6 +36,6 @@ export function ledgerFor(
   satisfactions: ReadonlyArray<{ crewMemberId: string; satisfaction: number }>,
   previous: ReadonlyMap<string, number>,
 ): Map<string, LedgerStep & { satisfaction: number }> {
-  const mean = satisfactions.length === 0 ? 0 : satisfactions.reduce((s, x) => s + x.satisfaction, 0) / satisfactions.length;
-  return new Map(satisfactions.map((x) => [x.crewMemberId, { satisfaction: x.satisfaction, ...ledgerStep(previous.get(x.crewMemberId) ?? 0, x.satisfaction, mean) }]));
+  const groupMean = mean(satisfactions.map((x) => x.satisfaction));
+  return new Map(satisfactions.map((x) => [x.crewMemberId, { satisfaction: x.satisfaction, ...ledgerStep(previous.get(x.crewMemberId) ?? 0, x.satisfaction, groupMean) }]));
 }
